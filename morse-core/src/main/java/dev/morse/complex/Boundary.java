@@ -1,0 +1,100 @@
+package dev.morse.complex;
+
+import java.util.Arrays;
+
+/**
+ * An immutable sparse integer incidence relation between cells, in CSR form: the entries of cell
+ * {@code c} are at indices {@code start(c) .. end(c) - 1}, each a target cell and a nonzero
+ * coefficient. Used for boundaries (faces with incidence numbers) and coboundaries.
+ *
+ * <p>Memory: 4 bytes per cell plus 8 bytes per entry.
+ */
+public final class Boundary {
+    private final int[] offsets;
+    private final int[] targets;
+    private final int[] coefficients;
+
+    /**
+     * Takes ownership of the arrays.
+     *
+     * @param offsets length cells + 1, non-decreasing, starting at 0
+     * @param targets target cell of each entry
+     * @param coefficients nonzero coefficient of each entry
+     */
+    public Boundary(int[] offsets, int[] targets, int[] coefficients) {
+        if (offsets.length == 0 || offsets[0] != 0 || offsets[offsets.length - 1] != targets.length
+                || targets.length != coefficients.length) {
+            throw new IllegalArgumentException("inconsistent CSR arrays");
+        }
+        this.offsets = offsets;
+        this.targets = targets;
+        this.coefficients = coefficients;
+    }
+
+    /** Number of cells (rows). */
+    public int cellCount() {
+        return offsets.length - 1;
+    }
+
+    /** Number of nonzero entries. */
+    public int entryCount() {
+        return targets.length;
+    }
+
+    /** First entry index of cell {@code c}. */
+    public int start(int c) {
+        return offsets[c];
+    }
+
+    /** One past the last entry index of cell {@code c}. */
+    public int end(int c) {
+        return offsets[c + 1];
+    }
+
+    /** Number of entries of cell {@code c}. */
+    public int size(int c) {
+        return offsets[c + 1] - offsets[c];
+    }
+
+    /** Target cell of entry {@code i}. */
+    public int target(int i) {
+        return targets[i];
+    }
+
+    /** Coefficient of entry {@code i}. */
+    public int coefficient(int i) {
+        return coefficients[i];
+    }
+
+    /** The coefficient of {@code target} in the row of {@code c}, or 0 (linear scan: rows are short). */
+    public int coefficient(int c, int target) {
+        for (int i = offsets[c]; i < offsets[c + 1]; i++) {
+            if (targets[i] == target) {
+                return coefficients[i];
+            }
+        }
+        return 0;
+    }
+
+    /** The transposed relation over {@code targetCount} cells, rows sorted by target. */
+    public Boundary transpose(int targetCount) {
+        int[] tOffsets = new int[targetCount + 1];
+        for (int t : targets) {
+            tOffsets[t + 1]++;
+        }
+        for (int v = 0; v < targetCount; v++) {
+            tOffsets[v + 1] += tOffsets[v];
+        }
+        int[] fill = Arrays.copyOf(tOffsets, targetCount);
+        int[] tTargets = new int[targets.length];
+        int[] tCoefficients = new int[targets.length];
+        for (int c = 0; c < cellCount(); c++) {
+            for (int i = offsets[c]; i < offsets[c + 1]; i++) {
+                int slot = fill[targets[i]]++;
+                tTargets[slot] = c;
+                tCoefficients[slot] = coefficients[i];
+            }
+        }
+        return new Boundary(tOffsets, tTargets, tCoefficients);
+    }
+}

@@ -1,0 +1,45 @@
+package dev.morse.complex;
+
+/**
+ * A finite free chain complex over the integers with a basis of cells. Cells are ints numbered by
+ * dimension: the cells of dimension {@code d} are {@code firstCell(d) .. firstCell(d) + cellCount(d) - 1}.
+ * The boundary of a cell of dimension {@code d} is a sum of cells of dimension {@code d - 1}.
+ * Implementations are immutable.
+ */
+public interface ChainComplex {
+    /** Which construction this is. */
+    ComplexKind kind();
+
+    /** The top dimension, or -1 when there are no cells. */
+    int dimension();
+
+    /** Total number of cells. */
+    int cellCount();
+
+    /** Number of cells of dimension {@code d}; 0 outside {@code 0..dimension()}. */
+    int cellCount(int d);
+
+    /** The first cell of dimension {@code d}, for {@code 0 <= d <= dimension() + 1}. */
+    int firstCell(int d);
+
+    /** The dimension of {@code cell}. */
+    int dimensionOf(int cell);
+
+    /** For every cell, its faces with incidence numbers. */
+    Boundary boundary();
+
+    /** For every cell, the cells having it as a face, with incidence numbers. */
+    Boundary coboundary();
+
+    /** A short human-readable name of {@code cell}, for reports and pictures. */
+    String cellName(int cell);
+
+    /** Cells per dimension, {@code [f0, f1, ...]}. */
+    default int[] cellCounts() {
+        int[] counts = new int[dimension() + 1];
+        for (int d = 0; d <= dimension(); d++) {
+            counts[d] = cellCount(d);
+        }
+        return counts;
+    }
+}

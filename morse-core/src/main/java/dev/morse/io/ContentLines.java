@@ -1,0 +1,79 @@
+package dev.morse.io;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+
+/**
+ * The meaningful lines of a text input: comments ({@code #} to the end of the line) cut off,
+ * surrounding white space trimmed, blank lines skipped, the first line checked as a header.
+ * Streaming: holds one line at a time.
+ */
+final class ContentLines {
+    private final BufferedReader reader;
+    private final String source;
+    private int lineNumber;
+
+    ContentLines(BufferedReader reader, String source) {
+        this.reader = reader;
+        this.source = source;
+    }
+
+    /** The next meaningful line, or {@code null} at the end. */
+    String next() {
+        try {
+            String line;
+            while ((line = reader.readLine()) != null) {
+                lineNumber++;
+                int hash = line.indexOf('#');
+                if (hash >= 0) {
+                    line = line.substring(0, hash);
+                }
+                line = line.strip();
+                if (!line.isEmpty()) {
+                    return line;
+                }
+            }
+            return null;
+        } catch (java.nio.charset.MalformedInputException e) {
+            throw error("not valid UTF-8 text");
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** Reads and checks the header {@code KIND VERSION}. */
+    void expectHeader(String kind, String version) {
+        String header = next();
+        if (header == null) {
+            throw new InputException(source, InputException.NO_LINE,
+                    "no header: expected '" + kind + " " + version + "' as the first line");
+        }
+        String[] words = header.split("\\s+");
+        if (words.length == 2 && words[0].equals(kind) && !words[1].equals(version)) {
+            throw error("unsupported version '" + words[1] + "' of " + kind + ": this program reads version " + version);
+        }
+        if (words.length != 2 || !words[0].equals(kind)) {
+            throw error("missing or unknown header: expected '" + kind + " " + version + "'");
+        }
+    }
+
+    /** An input error located at the current line. */
+    InputException error(String problem) {
+        return new InputException(source, lineNumber, problem);
+    }
+
+    /** The 1-based number of the line last returned. */
+    int lineNumber() {
+        return lineNumber;
+    }
+
+    String source() {
+        return source;
+    }
+
+    /** Splits on runs of white space; the line is already trimmed and non-empty. */
+    static String[] words(String line) {
+        return line.split("\\s+");
+    }
+}

@@ -1,0 +1,116 @@
+package dev.morse.io;
+
+import dev.morse.poset.OrderCycleException;
+import dev.morse.poset.Poset;
+import dev.morse.poset.PosetBuilder;
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.Reader;
+import java.io.StringReader;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+/**
+ * Reads the {@code morse-poset 1} format: a header line, then lines {@code LABEL} or
+ * {@code LABEL: LOWER ...}, each LOWER being below LABEL. Streaming; relations need not be covers.
+ */
+public final class PosetReader {
+    /** The header's first word. */
+    public static final String KIND = "morse-poset";
+    /** The only version read. */
+    public static final String VERSION = "1";
+
+    private PosetReader() {
+    }
+
+    /** Reads a poset file; the file name appears in error messages as given. */
+    public static Poset read(Path file) throws IOException {
+        try (BufferedReader reader = utf8(file)) {
+            return read(reader, file.toString());
+        }
+    }
+
+    /** Reads poset text from a string; {@code source} names it in error messages. */
+    public static Poset parse(String text, String source) {
+        try {
+            return read(new BufferedReader(new StringReader(text)), source);
+        } catch (IOException e) {
+            throw new AssertionError("a string reader does not fail", e);
+        }
+    }
+
+    /** Reads poset text from {@code reader}; {@code source} names it in error messages. */
+    public static Poset read(Reader reader, String source) throws IOException {
+        BufferedReader buffered = reader instanceof BufferedReader b ? b : new BufferedReader(reader);
+        ContentLines lines = new ContentLines(buffered, source);
+        lines.expectHeader(KIND, VERSION);
+        PosetBuilder builder = new PosetBuilder();
+        for (String line = lines.next(); line != null; line = lines.next()) {
+            readLine(line, lines, builder);
+        }
+        try {
+            return builder.build();
+        } catch (OrderCycleException e) {
+            throw cycleError(e, builder, lines.source());
+        }
+    }
+
+    private static void readLine(String line, ContentLines lines, PosetBuilder builder) {
+        int colon = line.indexOf(':');
+        String head = colon < 0 ? line : line.substring(0, colon).strip();
+        if (head.isEmpty()) {
+            throw lines.error("empty label before ':'");
+        }
+        if (containsWhitespace(head)) {
+            throw lines.error(colon < 0
+                    ? "expected 'LABEL' or 'LABEL: LOWER ...', found several words without ':'"
+                    : "expected one label before ':', found '" + head + "'");
+        }
+        int upper = builder.element(head);
+        if (colon < 0) {
+            return;
+        }
+        String rest = line.substring(colon + 1).strip();
+        if (rest.isEmpty()) {
+            return;
+        }
+        if (rest.indexOf(':') >= 0) {
+            throw lines.error("stray ':' after the first one");
+        }
+        for (String word : ContentLines.words(rest)) {
+            if (word.equals(head)) {
+                throw lines.error("label '" + head + "' is listed below itself");
+            }
+            builder.relate(builder.element(word), upper, lines.lineNumber());
+        }
+    }
+
+    private static boolean containsWhitespace(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            if (Character.isWhitespace(s.charAt(i))) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static InputException cycleError(OrderCycleException e, PosetBuilder builder, String source) {
+        int[] cycle = e.cycle();
+        StringBuilder text = new StringBuilder("the relations contain a cycle of ")
+                .append(cycle.length).append(" elements: ");
+        for (int x : cycle) {
+            text.append(builder.label(x)).append(" < ");
+        }
+        text.append(builder.label(cycle[0]));
+        return new InputException(source, e.tag(), text.toString());
+    }
+
+    static BufferedReader utf8(Path file) throws IOException {
+        return new BufferedReader(new java.io.InputStreamReader(Files.newInputStream(file),
+                StandardCharsets.UTF_8.newDecoder()
+                        .onMalformedInput(CodingErrorAction.REPORT)
+                        .onUnmappableCharacter(CodingErrorAction.REPORT)), 1 << 16);
+    }
+}

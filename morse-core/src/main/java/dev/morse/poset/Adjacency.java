@@ -1,0 +1,108 @@
+package dev.morse.poset;
+
+import java.util.Arrays;
+
+/**
+ * An immutable directed graph on ints 0..n-1 in compressed sparse row form: the neighbours of
+ * {@code x} are {@code target(start(x)) .. target(end(x) - 1)}, ascending.
+ *
+ * <p>Memory: 4 bytes per vertex plus 4 bytes per edge.
+ */
+public final class Adjacency {
+    private final int[] offsets;
+    private final int[] targets;
+
+    /**
+     * Wraps arrays without copying; callers hand over ownership.
+     *
+     * @param offsets length n + 1, non-decreasing, {@code offsets[0] == 0}
+     * @param targets length {@code offsets[n]}
+     */
+    Adjacency(int[] offsets, int[] targets) {
+        if (offsets.length == 0 || offsets[0] != 0 || offsets[offsets.length - 1] != targets.length) {
+            throw new IllegalArgumentException("offsets do not describe targets");
+        }
+        this.offsets = offsets;
+        this.targets = targets;
+    }
+
+    /** Builds an adjacency from edge lists; sorts each row. */
+    public static Adjacency fromEdges(int vertexCount, int[] from, int[] to, int edgeCount) {
+        int[] offsets = new int[vertexCount + 1];
+        for (int e = 0; e < edgeCount; e++) {
+            offsets[from[e] + 1]++;
+        }
+        for (int v = 0; v < vertexCount; v++) {
+            offsets[v + 1] += offsets[v];
+        }
+        int[] fill = Arrays.copyOf(offsets, vertexCount);
+        int[] targets = new int[edgeCount];
+        for (int e = 0; e < edgeCount; e++) {
+            targets[fill[from[e]]++] = to[e];
+        }
+        for (int v = 0; v < vertexCount; v++) {
+            Arrays.sort(targets, offsets[v], offsets[v + 1]);
+        }
+        return new Adjacency(offsets, targets);
+    }
+
+    /** Number of vertices. */
+    public int vertexCount() {
+        return offsets.length - 1;
+    }
+
+    /** Number of edges. */
+    public int edgeCount() {
+        return targets.length;
+    }
+
+    /** First index of the neighbours of {@code x}. */
+    public int start(int x) {
+        return offsets[x];
+    }
+
+    /** One past the last index of the neighbours of {@code x}. */
+    public int end(int x) {
+        return offsets[x + 1];
+    }
+
+    /** Number of neighbours of {@code x}. */
+    public int degree(int x) {
+        return offsets[x + 1] - offsets[x];
+    }
+
+    /** The neighbour stored at index {@code i}. */
+    public int target(int i) {
+        return targets[i];
+    }
+
+    /** A copy of the neighbours of {@code x}. */
+    public int[] neighbours(int x) {
+        return Arrays.copyOfRange(targets, offsets[x], offsets[x + 1]);
+    }
+
+    /** Whether {@code y} is a neighbour of {@code x} (binary search). */
+    public boolean contains(int x, int y) {
+        return Arrays.binarySearch(targets, offsets[x], offsets[x + 1], y) >= 0;
+    }
+
+    /** The reversed graph. */
+    public Adjacency transpose() {
+        int n = vertexCount();
+        int[] tOffsets = new int[n + 1];
+        for (int t : targets) {
+            tOffsets[t + 1]++;
+        }
+        for (int v = 0; v < n; v++) {
+            tOffsets[v + 1] += tOffsets[v];
+        }
+        int[] fill = Arrays.copyOf(tOffsets, n);
+        int[] tTargets = new int[targets.length];
+        for (int x = 0; x < n; x++) {
+            for (int i = offsets[x]; i < offsets[x + 1]; i++) {
+                tTargets[fill[targets[i]]++] = x; // x ascending, so rows come out sorted
+            }
+        }
+        return new Adjacency(tOffsets, tTargets);
+    }
+}

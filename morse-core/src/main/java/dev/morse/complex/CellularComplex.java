@@ -142,4 +142,10 @@ public final class CellularComplex implements ChainComplex {
     public String cellName(int cell) {
         return poset.label(elementOfCell[cell]);
     }
+
+    /** The cell's element alone: cells are ordered as the poset lists its elements. */
+    @Override
+    public int[] vertexTuple(int cell) {
+        return new int[] {elementOfCell[cell]};
+    }
 }

@@ -120,4 +120,10 @@ public final class OrderComplex implements ChainComplex {
         }
         return name.toString();
     }
+
+    /** The chain itself, so lexicographic matchings follow chains. */
+    @Override
+    public int[] vertexTuple(int cell) {
+        return chain(cell);
+    }
 }

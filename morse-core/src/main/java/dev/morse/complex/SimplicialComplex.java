@@ -216,4 +216,10 @@ public final class SimplicialComplex implements ChainComplex {
         }
         return name.append('}').toString();
     }
+
+    /** The vertex ids, so lexicographic matchings follow simplices. */
+    @Override
+    public int[] vertexTuple(int cell) {
+        return simplex(cell);
+    }
 }

@@ -195,7 +195,9 @@ public final class AlgebraicReduction {
             }
         }
         List<SparseIntegerMatrix> boundaries = new ArrayList<>();
-        boundaries.add(new SparseIntegerMatrix(0, new int[counts.length == 0 ? 1 : counts[0] + 1], new int[0], new long[0]));
+        if (counts.length > 0) {
+            boundaries.add(MorseComplex.zeroBoundary(counts[0]));
+        }
         for (int d = 1; d <= top; d++) {
             int[] offsets = new int[counts[d] + 1];
             IntArrayList rows = new IntArrayList();

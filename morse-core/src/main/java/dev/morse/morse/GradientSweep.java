@@ -38,7 +38,9 @@ public final class GradientSweep {
         int top = complex.dimension();
         int[] counts = matching.criticalCounts(complex);
         List<SparseIntegerMatrix> boundaries = new ArrayList<>();
-        boundaries.add(new SparseIntegerMatrix(0, new int[counts.length == 0 ? 1 : counts[0] + 1], new int[0], new long[0]));
+        if (counts.length > 0) {
+            boundaries.add(MorseComplex.zeroBoundary(counts[0]));
+        }
         int[] criticalIndex = new int[complex.cellCount()];
         Arrays.fill(criticalIndex, -1);
         for (int d = 0; d <= top; d++) {

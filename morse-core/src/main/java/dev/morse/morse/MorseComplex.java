@@ -21,7 +21,7 @@ public final class MorseComplex {
      *     an empty matrix with no rows
      */
     public MorseComplex(int[] cellCounts, List<SparseIntegerMatrix> boundaries) {
-        if (boundaries.size() != cellCounts.length && !(cellCounts.length == 0 && boundaries.isEmpty())) {
+        if (boundaries.size() != cellCounts.length) {
             throw new IllegalArgumentException("one boundary matrix per dimension is needed");
         }
         for (int d = 1; d < cellCounts.length; d++) {
@@ -32,6 +32,11 @@ public final class MorseComplex {
         }
         this.cellCounts = cellCounts.clone();
         this.boundaries = List.copyOf(boundaries);
+    }
+
+    /** The boundary list a complex starts with: the matrix of ∂_0, with no rows. */
+    static SparseIntegerMatrix zeroBoundary(int cellsOfDimensionZero) {
+        return new SparseIntegerMatrix(0, new int[cellsOfDimensionZero + 1], new int[0], new long[0]);
     }
 
     /** The top dimension, or -1 when empty. */

@@ -188,7 +188,7 @@ final class CorpusCatalog {
         e.add(simplicial("torus-7", "the 7-vertex torus (Moebius, Csaszar): 14 triangles",
                 SURFACE, Expected.parse("Z, Z^2, Z"), Triangulations::torus7));
         e.add(simplicial("klein-bottle-8",
-                "an 8-vertex Klein bottle, vertex-minimal (Franklin 1934): 16 triangles",
+                "an 8-vertex Klein bottle, vertex-minimal (Franklin 1934, from memory): 16 triangles",
                 SURFACE, Expected.parse("Z, Z + Z/2, 0"), Triangulations::kleinBottle8));
         e.add(simplicial("projective-plane-6", "the 6-vertex real projective plane (half icosahedron): 10 triangles",
                 SURFACE + "; Hatcher 2002, Example 2.42", Expected.parse("Z, Z/2, 0"),
@@ -205,7 +205,7 @@ final class CorpusCatalog {
                 "standard: the Petersen graph is connected with 10 vertices and 15 edges, so H_1 = Z^6",
                 Expected.parse("Z, Z^6"), () -> MatchingComplex.facets(5)));
         e.add(simplicial("matching-7", "matching complex of K_7: 21 vertices, 105 edges, 105 triangles; 3-torsion",
-                "Bouc 1992 (H~_1 = Z/3; rational homology only in dimension 2); Shareshian-Wachs, Torsion in the"
+                "Bouc 1992 (H~_1 = Z/3; rational homology only in dimension 2, from memory); Shareshian-Wachs, Torsion in the"
                         + " matching complex and chessboard complex, 2007; rank 20 derived from the Euler"
                         + " characteristic 21 - 105 + 105 = 21",
                 Expected.parse("Z, Z/3, Z^20"), () -> MatchingComplex.facets(7)));

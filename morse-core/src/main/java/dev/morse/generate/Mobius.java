@@ -4,7 +4,7 @@ import dev.morse.poset.Poset;
 
 /**
  * The Möbius function of a bounded poset from its defining recursion {@code μ(0̂,0̂) = 1},
- * {@code μ(0̂,x) = -Σ_{0̂ ≤ z < x} μ(0̂,z)} (Rota 1964; Stanley, Enumerative Combinatorics I, §3.7).
+ * {@code μ(0̂,x) = -Σ_{0̂ ≤ z < x} μ(0̂,z)} (Rota 1964; Stanley, Enumerative Combinatorics I, Ch. 3).
  * Exact: an overflow of {@code long} throws.
  */
 public final class Mobius {

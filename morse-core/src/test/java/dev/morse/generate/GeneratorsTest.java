@@ -48,7 +48,7 @@ class GeneratorsTest {
         return p;
     }
 
-    /** Gaussian binomial [n choose k]_q = Π_{i<k} (q^(n-i) - 1) / (q^(i+1) - 1) (Stanley EC1, §1.7). */
+    /** Gaussian binomial [n choose k]_q = Π_{i<k} (q^(n-i) - 1) / (q^(i+1) - 1) (Stanley EC1, §1.7; from memory). */
     private static long gaussianBinomial(int n, int k, int q) {
         long num = 1;
         long den = 1;
@@ -81,7 +81,7 @@ class GeneratorsTest {
         for (int n = 1; n <= 7; n++) {
             assertEquals(bell[n - 1], PartitionLattice.lattice(n).size(), "n = " + n);
         }
-        // ... and the recurrence B_(n+1) = Σ_k C(n,k) B_k (Stanley EC1, §1.9) reproduces them
+        // ... and the recurrence B_(n+1) = Σ_k C(n,k) B_k (common practice) reproduces them
         long[] b = new long[8];
         b[0] = 1;
         for (int n = 0; n < 7; n++) {
@@ -96,7 +96,7 @@ class GeneratorsTest {
 
     @Test
     void partitionLatticeRanksAreStirlingNumbers() {
-        // partitions of [n] into k blocks: S(n,k) = k S(n-1,k) + S(n-1,k-1) (Stanley EC1, §1.9);
+        // partitions of [n] into k blocks: S(n,k) = k S(n-1,k) + S(n-1,k-1) (common practice);
         // height h means n - h blocks
         int n = 6;
         long[][] s = new long[n + 1][n + 1];
@@ -114,7 +114,7 @@ class GeneratorsTest {
 
     @Test
     void partitionLatticeMobiusFunction() {
-        // μ(Π_n) = (-1)^(n-1) (n-1)!  (Stanley, Enumerative Combinatorics I, Example 3.10.4)
+        // μ(Π_n) = (-1)^(n-1) (n-1)!  (Stanley, Enumerative Combinatorics I, §3.10; REFERENCES.md)
         for (int n = 1; n <= 6; n++) {
             long expected = (n % 2 == 1 ? 1 : -1) * factorial(n - 1);
             assertEquals(expected, Mobius.bottomToTop(PartitionLattice.lattice(n)), "n = " + n);
@@ -135,7 +135,7 @@ class GeneratorsTest {
 
     @Test
     void subspaceCountsAreGaussianBinomials() {
-        // subspaces of F_q^n of dimension k: [n choose k]_q (Stanley EC1, Prop. 1.7.2)
+        // subspaces of F_q^n of dimension k: [n choose k]_q (Stanley EC1, §1.7; from memory)
         int[][] cases = {{2, 1}, {2, 2}, {2, 3}, {2, 4}, {2, 5}, {3, 2}, {3, 3}, {3, 4}, {5, 3}};
         for (int[] qn : cases) {
             int q = qn[0];
@@ -164,7 +164,7 @@ class GeneratorsTest {
 
     @Test
     void subspaceLatticeMobiusFunction() {
-        // μ(0, F_q^n) = (-1)^n q^C(n,2)  (Stanley EC1, Example 3.10.2)
+        // μ(0, F_q^n) = (-1)^n q^C(n,2)  (Stanley EC1, §3.10, from memory; Solomon-Tits with Philip Hall)
         int[][] cases = {{2, 1}, {2, 2}, {2, 3}, {2, 4}, {3, 2}, {3, 3}, {5, 2}};
         for (int[] qn : cases) {
             int q = qn[0];
@@ -176,6 +176,7 @@ class GeneratorsTest {
 
     @Test
     void subspaceLabelsAreEchelonBases() {
+        // in F_2^3: the line spanned by 110 lies in the plane x_3 = 0, the line of 001 does not
         Poset lattice = SubspaceLattice.lattice(2, 3);
         assertTrue(lattice.find("<>").isPresent());
         assertTrue(lattice.find("<100,010,001>").isPresent());
@@ -194,7 +195,7 @@ class GeneratorsTest {
 
     @Test
     void booleanLatticeCounts() {
-        // |B_n| = 2^n, n 2^(n-1) covers, μ = (-1)^n (Stanley EC1, Example 3.8.3)
+        // |B_n| = 2^n, n 2^(n-1) covers, μ = (-1)^n (common practice)
         for (int n = 0; n <= 7; n++) {
             Poset b = BooleanLattice.lattice(n);
             assertEquals(1L << n, b.size());
@@ -207,7 +208,7 @@ class GeneratorsTest {
 
     @Test
     void divisorLatticeMobiusIsTheNumberTheoreticOne() {
-        // μ(1, N) in the divisor lattice is the classical Möbius function (Rota 1964; Stanley EC1, §3.8)
+        // μ(1, N) in the divisor lattice is the classical Möbius function (Rota 1964; common practice)
         for (int n = 1; n <= 200; n++) {
             assertEquals(numberTheoreticMobius(n), Mobius.bottomToTop(DivisorLattice.lattice(n)), "N = " + n);
         }
@@ -260,7 +261,7 @@ class GeneratorsTest {
             for (int k = 0; k <= d; k++) {
                 assertEquals(binomial(d, k) * power(2, d - k), sizes[k], "d = " + d + ", k = " + k);
             }
-            // each k-face has 2k facets
+            // each k-face has 2k facets (common practice)
             long covers = 0;
             for (int k = 1; k <= d; k++) {
                 covers += sizes[k] * 2 * k;
@@ -331,6 +332,7 @@ class GeneratorsTest {
 
     @Test
     void projectiveSpaceHasHalfTheCubeBoundary() {
+        // the antipodal map is free on faces and covers, so every count halves (derived)
         for (int d = 1; d <= 6; d++) {
             Poset rp = ProjectiveSpace.antipodalCubeQuotient(d);
             Poset sphere = CubeFaces.boundaryFacePoset(d + 1);
@@ -440,6 +442,7 @@ class GeneratorsTest {
 
     @Test
     void skeletonFacetCounts() {
+        // the k-skeleton of the (n-1)-simplex has C(n,k+1) facets (common practice)
         for (int n = 1; n <= 8; n++) {
             for (int k = 0; k < n; k++) {
                 Facets s = Skeleton.ofSimplex(k, n);
@@ -505,7 +508,7 @@ class GeneratorsTest {
 
     @Test
     void productSizesAndCovers() {
-        // |P × Q| = |P||Q| and covers(P × Q) = covers(P)|Q| + |P| covers(Q)
+        // |P × Q| = |P||Q| and covers(P × Q) = covers(P)|Q| + |P| covers(Q) (common practice)
         Poset p = PartitionLattice.properPart(4);
         Poset q = BooleanLattice.properPart(3);
         Poset pq = PosetOperations.product(p, q);
@@ -517,7 +520,7 @@ class GeneratorsTest {
 
     @Test
     void mobiusFunctionIsMultiplicativeOnProducts() {
-        // μ_(P×Q)((x,y),(x',y')) = μ_P(x,x') μ_Q(y,y') (Stanley EC1, Prop. 3.8.2)
+        // μ_(P×Q)((x,y),(x',y')) = μ_P(x,x') μ_Q(y,y') (product theorem, Rota 1964; from memory)
         Poset p = PartitionLattice.lattice(4);
         Poset q = SubspaceLattice.lattice(2, 3);
         assertEquals(Mobius.bottomToTop(p) * Mobius.bottomToTop(q),
@@ -526,7 +529,7 @@ class GeneratorsTest {
 
     @Test
     void ordinalSumCovers() {
-        // the new covers join every maximal element below to every minimal element above
+        // the new covers join every maximal element below to every minimal element above (common practice)
         Poset lower = SmallPosets.antichain(3, "a");
         Poset upper = BooleanLattice.properPart(3);
         Poset sum = PosetOperations.ordinalSum(lower, upper);
@@ -538,6 +541,7 @@ class GeneratorsTest {
 
     @Test
     void ordinalSumOfChainsIsAChain() {
+        // a 2-chain below a 3-chain is a 5-chain (common practice)
         Poset sum = PosetOperations.ordinalSum(SmallPosets.chain(2, "x"), SmallPosets.chain(3, "y"));
         assertEquals(5, sum.size());
         assertEquals(4, sum.coverCount());
@@ -546,6 +550,7 @@ class GeneratorsTest {
 
     @Test
     void dualReversesTheOrder() {
+        // 2 divides 4, so 4 is below 2 in the dual; dualising twice gives the poset back
         Poset p = DivisorLattice.lattice(12);
         Poset d = PosetOperations.dual(p);
         int two = d.find("2").orElseThrow();
@@ -560,6 +565,7 @@ class GeneratorsTest {
 
     @Test
     void properPartNeedsABoundedPoset() {
+        // a hexagon has no least element; a k-chain loses its two ends
         assertThrows(IllegalArgumentException.class, () -> PosetOperations.properPart(BooleanLattice.properPart(3)));
         assertEquals(0, PosetOperations.properPart(SmallPosets.chain(1)).size());
         assertEquals(3, PosetOperations.properPart(SmallPosets.chain(5)).size());
@@ -581,6 +587,7 @@ class GeneratorsTest {
 
     @Test
     void withoutBottomAndTop() {
+        // B_3 has 8 elements: removing {} or {1,2,3} leaves 7
         Poset b = BooleanLattice.lattice(3);
         assertEquals(7, PosetOperations.withoutBottom(b).size());
         assertFalse(PosetOperations.withoutBottom(b).find("{}").isPresent());
@@ -599,6 +606,7 @@ class GeneratorsTest {
 
     @Test
     void everyGeneratedLabelCanBeWritten() {
+        // DESIGN.md: a label has no white space, ':' or '#'
         List<Poset> posets = new ArrayList<>(List.of(BooleanLattice.lattice(4), CubeFaces.faceLattice(3),
                 CrossPolytopeFaces.faceLattice(3), PartitionLattice.lattice(5), SubspaceLattice.lattice(3, 2),
                 SubspaceLattice.lattice(11, 2), DivisorLattice.lattice(360), ProjectiveSpace.antipodalCubeQuotient(3),

@@ -49,7 +49,7 @@ final class ContentLines {
             throw new InputException(source, InputException.NO_LINE,
                     "no header: expected '" + kind + " " + version + "' as the first line");
         }
-        String[] words = header.split("\\s+");
+        String[] words = words(header);
         if (words.length == 2 && words[0].equals(kind) && !words[1].equals(version)) {
             throw error("unsupported version '" + words[1] + "' of " + kind + ": this program reads version " + version);
         }
@@ -72,8 +72,26 @@ final class ContentLines {
         return source;
     }
 
-    /** Splits on runs of white space; the line is already trimmed and non-empty. */
+    /**
+     * Splits on runs of white space in the sense of {@link Character#isWhitespace}, the same sense
+     * in which {@link String#strip()} trims lines, so that no word ever contains white space; the
+     * line is already trimmed and non-empty.
+     */
     static String[] words(String line) {
-        return line.split("\\s+");
+        java.util.List<String> words = new java.util.ArrayList<>();
+        int i = 0;
+        while (i < line.length()) {
+            while (i < line.length() && Character.isWhitespace(line.charAt(i))) {
+                i++;
+            }
+            int start = i;
+            while (i < line.length() && !Character.isWhitespace(line.charAt(i))) {
+                i++;
+            }
+            if (i > start) {
+                words.add(line.substring(start, i));
+            }
+        }
+        return words.toArray(new String[0]);
     }
 }

@@ -35,8 +35,9 @@ final class ContentLines {
                 }
             }
             return null;
-        } catch (java.nio.charset.MalformedInputException e) {
-            throw error("not valid UTF-8 text");
+        } catch (java.nio.charset.CharacterCodingException e) {
+            // the decoder runs ahead of the lines handed out, so no line number would be trustworthy
+            throw new InputException(source, InputException.NO_LINE, "not valid UTF-8 text");
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

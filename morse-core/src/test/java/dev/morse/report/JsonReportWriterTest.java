@@ -23,7 +23,7 @@ class JsonReportWriterTest {
 
     /**
      * The Klein bottle: H = Z, Z + Z/2, 0 (REFERENCES.md; Hatcher, Algebraic Topology, 2002, Example
-     * 2.37). Cells of its 8-vertex triangulation: f0 = 8, and χ = 0 with 3 f2 = 2 f1 gives f1 = 24, f2 = 16.
+     * 2.37, numbering from memory). Cells of its 8-vertex triangulation: f0 = 8, and χ = 0 with 3 f2 = 2 f1 gives f1 = 24, f2 = 16.
      */
     static HomologyReport kleinBottle() {
         Homology homology = new Homology(Coefficients.INTEGERS, false, List.of(

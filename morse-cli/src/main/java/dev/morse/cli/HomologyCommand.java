@@ -20,8 +20,10 @@ import picocli.CommandLine.Spec;
 /** {@code morse homology FILE}: the homology of one poset or simplicial file. */
 @Command(name = "homology",
         description = {
-            "Computes the homology of FILE: the order complex of a poset (morse-poset 1), computed on",
-            "the cellular complex when the poset is a CW poset, or a simplicial complex (morse-simplicial 1)."
+            "Computes the exact homology of a poset or simplicial file.",
+            "A poset file (morse-poset 1) stands for its order complex, computed on the much smaller cellular"
+                    + " complex when the poset is a CW poset; a simplicial file (morse-simplicial 1) stands for all"
+                    + " faces of its listed faces."
         })
 final class HomologyCommand implements Callable<Integer> {
     @Spec

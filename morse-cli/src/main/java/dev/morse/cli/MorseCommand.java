@@ -3,6 +3,7 @@ package dev.morse.cli;
 import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -31,10 +32,14 @@ public final class MorseCommand implements Callable<Integer> {
         try {
             code = newCommandLine().setOut(out).setErr(err).execute(args);
         } catch (OutOfMemoryError e) {
+            // picocli hands only Exceptions to the handlers; Errors arrive here
             err.println("morse: out of memory; give the JVM more with JAVA_OPTS=-Xmx8g (or larger)");
             code = Failures.INTERNAL_FAILURE;
         } catch (Throwable e) {
             err.println("morse: internal error: " + e);
+            if (List.of(args).contains("--debug")) {
+                e.printStackTrace(err);
+            }
             code = Failures.INTERNAL_FAILURE;
         }
         out.flush();

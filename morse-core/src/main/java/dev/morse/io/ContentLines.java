@@ -10,6 +10,8 @@ import java.io.UncheckedIOException;
  * Streaming: holds one line at a time.
  */
 final class ContentLines {
+    private static final String BYTE_ORDER_MARK = "\uFEFF";
+
     private final BufferedReader reader;
     private final String source;
     private int lineNumber;
@@ -25,6 +27,10 @@ final class ContentLines {
             String line;
             while ((line = reader.readLine()) != null) {
                 lineNumber++;
+                if (lineNumber == 1 && line.startsWith(BYTE_ORDER_MARK)) {
+                    // some editors start UTF-8 files with an invisible byte order mark
+                    line = line.substring(1);
+                }
                 int hash = line.indexOf('#');
                 if (hash >= 0) {
                     line = line.substring(0, hash);

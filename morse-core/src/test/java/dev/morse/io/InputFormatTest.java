@@ -13,6 +13,12 @@ class InputFormatTest {
     }
 
     @Test
+    void leadingByteOrderMarkIsSkipped() {
+        assertEquals(InputFormat.POSET, InputFormat.detect("\uFEFFmorse-poset 1\na\n", "p"));
+        assertEquals(1, PosetReader.parse("\uFEFFmorse-poset 1\na\n", "p").size());
+    }
+
+    @Test
     void otherVersionsAreLeftToTheReader() {
         assertEquals(InputFormat.POSET, InputFormat.detect("morse-poset 7\n", "p"));
     }

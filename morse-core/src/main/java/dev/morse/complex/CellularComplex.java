@@ -4,133 +4,97 @@ import dev.morse.poset.Adjacency;
 import dev.morse.poset.Poset;
 
 /**
- * The cellular chain complex of a CW poset: one cell per element, of dimension its height, and
- * incidence numbers ±1 on covers. The signs are found cell by cell: an edge gets +1 and -1 on its
- * two ends; for a higher cell, any two faces meeting in a common codimension-one face must have
- * opposite products of signs across it, which fixes all signs once one is chosen, because the
- * boundary of a regular cell is a connected sphere (Björner, "Posets, regular CW complexes and
- * Bruhat order", 1984; Lundell and Weingram, The topology of CW complexes, 1969, §V.3).
+ * The cellular chain complex of a CW poset: one cell per element, of dimension its height, with
+ * boundary {@code ∂x = Σ ε(x, y) y} over the elements y covered by x, where the incidence signs
+ * ε = ±1 are those found by {@link CwPosetCheck}. When the poset is the face poset of a regular CW
+ * complex this computes the homology of that complex, which is that of the order complex (its
+ * barycentric subdivision; Björner 1984), with one cell per element instead of one per chain.
+ * Cells are numbered by dimension, then by element id.
  *
- * <p>Memory: 8 bytes per cell for the numbering plus 8 bytes per cover in each of the boundary and
- * the coboundary.
+ * <p>Memory: 12 bytes per cell (element, cell and boundary offset) plus 8 bytes per cover, and
+ * as much again for the coboundary once requested; the poset itself is shared.
  */
 public final class CellularComplex implements ChainComplex {
     private final Poset poset;
     private final GradedCells cells;
     private final int[] elementOfCell;
+    private final int[] cellOfElement;
     private final Boundary boundary;
-    private final Boundary coboundary;
+    private final CoboundaryCache coboundary;
 
-    private CellularComplex(Poset poset, GradedCells cells, int[] elementOfCell, Boundary boundary) {
+    private CellularComplex(Poset poset, GradedCells cells, int[] elementOfCell, int[] cellOfElement, Boundary boundary) {
         this.poset = poset;
         this.cells = cells;
         this.elementOfCell = elementOfCell;
+        this.cellOfElement = cellOfElement;
         this.boundary = boundary;
-        this.coboundary = boundary.transpose(cells.cellCount());
+        this.coboundary = new CoboundaryCache(boundary);
     }
 
     /**
-     * The cellular complex of {@code poset}.
+     * The cellular chain complex of a CW poset.
      *
-     * @throws IllegalArgumentException if the poset is not graded or no consistent signs exist
+     * @throws IllegalArgumentException with the {@link CwPosetVerdict#reason()} if {@code poset}
+     *     is not a CW poset
      */
     public static CellularComplex of(Poset poset) {
-        if (!poset.isGraded()) {
-            throw new IllegalArgumentException("a poset that is not graded has no cellular complex");
+        CwStructure structure = CwPosetCheck.analyse(poset);
+        if (!structure.verdict().isCwPoset()) {
+            throw new IllegalArgumentException(structure.verdict().reason());
         }
+        return from(poset, structure.coverSigns());
+    }
+
+    /** Builds from signs already found, indexed like the lower-cover entries of the poset. */
+    static CellularComplex from(Poset poset, byte[] coverSigns) {
         int n = poset.size();
-        int[] counts = new int[poset.maxHeight() + 1];
+        int top = poset.maxHeight();
+        int[] counts = new int[top + 1];
         for (int x = 0; x < n; x++) {
             counts[poset.height(x)]++;
         }
         GradedCells cells = new GradedCells(counts);
-        int[] next = new int[counts.length];
-        for (int d = 0; d < counts.length; d++) {
+        int[] next = new int[top + 1];
+        for (int d = 0; d <= top; d++) {
             next[d] = cells.firstCell(d);
         }
-        int[] cellOf = new int[n];
-        int[] elementOf = new int[n];
+        int[] elementOfCell = new int[n];
+        int[] cellOfElement = new int[n];
         for (int x = 0; x < n; x++) {
             int c = next[poset.height(x)]++;
-            cellOf[x] = c;
-            elementOf[c] = x;
+            elementOfCell[c] = x;
+            cellOfElement[x] = c;
         }
-        Adjacency below = poset.lowerCovers();
+        Adjacency lower = poset.lowerCovers();
         int[] offsets = new int[n + 1];
-        int[] targets = new int[below.edgeCount()];
-        int[] signs = new int[below.edgeCount()];
-        int k = 0;
-        // cells come in order of dimension, so the signs of every face are known before they are needed
+        int[] targets = new int[poset.coverCount()];
+        int[] coefficients = new int[poset.coverCount()];
+        int e = 0;
         for (int c = 0; c < n; c++) {
-            int x = elementOf[c];
-            int[] faces = below.neighbours(x);
-            int[] faceSigns = signsOf(poset, x, faces, (y, z) -> {
-                for (int i = offsets[cellOf[y]]; i < offsets[cellOf[y] + 1]; i++) {
-                    if (targets[i] == cellOf[z]) {
-                        return signs[i];
-                    }
-                }
-                throw new IllegalStateException("no cover " + z + " < " + y);
-            });
-            for (int i = 0; i < faces.length; i++) {
-                targets[k] = cellOf[faces[i]];
-                signs[k] = faceSigns[i];
-                k++;
+            int x = elementOfCell[c];
+            for (int i = lower.start(x); i < lower.end(x); i++) {
+                targets[e] = cellOfElement[lower.target(i)];
+                coefficients[e] = coverSigns[i];
+                e++;
             }
-            offsets[c + 1] = k;
+            offsets[c + 1] = e;
         }
-        return new CellularComplex(poset, cells, elementOf, new Boundary(offsets, targets, signs));
+        return new CellularComplex(poset, cells, elementOfCell, cellOfElement, new Boundary(offsets, targets, coefficients));
     }
 
-    private static int[] signsOf(Poset poset, int x, int[] faces, java.util.function.IntBinaryOperator known) {
-        int[] sign = new int[faces.length];
-        if (faces.length == 0) {
-            return sign;
-        }
-        if (poset.height(x) == 1) {
-            if (faces.length != 2) {
-                throw new IllegalArgumentException("edge '" + poset.label(x) + "' does not have two ends");
-            }
-            sign[0] = 1;
-            sign[1] = -1;
-            return sign;
-        }
-        Adjacency below = poset.lowerCovers();
-        // breadth-first over the faces: a fixed sign fixes the signs of the faces meeting it
-        int[] queue = new int[faces.length];
-        int head = 0;
-        int tail = 0;
-        sign[0] = 1;
-        queue[tail++] = 0;
-        while (head < tail) {
-            int i = queue[head++];
-            int y = faces[i];
-            for (int a = below.start(y); a < below.end(y); a++) {
-                int z = below.target(a);
-                int yz = known.applyAsInt(y, z);
-                for (int j = 0; j < faces.length; j++) {
-                    if (j != i && below.contains(faces[j], z)) {
-                        int wanted = -sign[i] * yz * known.applyAsInt(faces[j], z);
-                        if (sign[j] == 0) {
-                            sign[j] = wanted;
-                            queue[tail++] = j;
-                        } else if (sign[j] != wanted) {
-                            throw new IllegalArgumentException("no consistent incidence signs on the boundary of '"
-                                    + poset.label(x) + "'");
-                        }
-                    }
-                }
-            }
-        }
-        if (tail < faces.length) {
-            throw new IllegalArgumentException("the boundary of '" + poset.label(x) + "' is not connected");
-        }
-        return sign;
+    /** The CW poset. */
+    public Poset poset() {
+        return poset;
     }
 
-    /** The poset element behind {@code cell}. */
+    /** The poset element of {@code cell}. */
     public int element(int cell) {
         return elementOfCell[cell];
+    }
+
+    /** The cell of poset element {@code element}. */
+    public int cell(int element) {
+        return cellOfElement[element];
     }
 
     @Override
@@ -170,11 +134,18 @@ public final class CellularComplex implements ChainComplex {
 
     @Override
     public Boundary coboundary() {
-        return coboundary;
+        return coboundary.get();
     }
 
+    /** The element's label. */
     @Override
     public String cellName(int cell) {
         return poset.label(elementOfCell[cell]);
+    }
+
+    /** The cell's element alone: cells are ordered as the poset lists its elements. */
+    @Override
+    public int[] vertexTuple(int cell) {
+        return new int[] {elementOfCell[cell]};
     }
 }

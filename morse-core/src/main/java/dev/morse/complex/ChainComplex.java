@@ -34,6 +34,15 @@ public interface ChainComplex {
     /** A short human-readable name of {@code cell}, for reports and pictures. */
     String cellName(int cell);
 
+    /**
+     * The vertices of {@code cell} as a tuple whose lexicographic order is the order that
+     * lexicographic matchings follow: the chain's elements for an order complex, the vertex ids for a
+     * simplex. By default a cell is its own single vertex.
+     */
+    default int[] vertexTuple(int cell) {
+        return new int[] {cell};
+    }
+
     /** Cells per dimension, {@code [f0, f1, ...]}. */
     default int[] cellCounts() {
         int[] counts = new int[dimension() + 1];

@@ -1,58 +1,69 @@
 package dev.morse.complex;
 
-import dev.morse.poset.Adjacency;
 import dev.morse.poset.Poset;
-import it.unimi.dsi.fastutil.ints.IntArrayList;
-import java.util.ArrayList;
-import java.util.List;
+import java.util.Arrays;
 
 /**
- * The order complex Δ(P) of a poset: one simplex per nonempty chain, built as the simplicial
- * complex whose facets are the maximal chains (the maximal chains are the cover paths from a
- * minimal to a maximal element). Vertices are numbered along a linear extension, so a simplex's
- * ascending vertices are its chain read upwards.
+ * The order complex Δ(P) of a poset: one simplex per nonempty chain {@code x0 < x1 < ... < xd},
+ * of dimension d, with the simplicial boundary {@code Σ (-1)^i [x0 .. x̂i .. xd]} (orientation
+ * along the order). Vertices are numbered as the poset's elements; the chains of each higher
+ * dimension follow in lexicographic order of their element ids, bottom first.
  *
- * <p>Memory: that of {@link SimplicialComplex}, per chain.
+ * <p>Memory: a cell of dimension d costs {@code 4(d+1)} bytes for its elements and
+ * {@code 4 + 8(d+1)} for its boundary row, {@code 12(d+1) + 4} bytes in all, and about as much
+ * again for the coboundary once it is requested. Building needs, for a while, 4 bytes per
+ * comparable pair (the up-sets) and 4 bytes per cell (the prefix tree of chains).
  */
 public final class OrderComplex implements ChainComplex {
-    private final SimplicialComplex simplices;
+    /** The default bound on the number of cells: every cell id must be an int. */
+    public static final long DEFAULT_CELL_LIMIT = CellLimits.MAX_ARRAY;
 
-    private OrderComplex(SimplicialComplex simplices) {
-        this.simplices = simplices;
+    private final Poset poset;
+    private final GradedCells cells;
+    private final int[][] chains;
+    private final Boundary boundary;
+    private final CoboundaryCache coboundary;
+
+    private OrderComplex(Poset poset, GradedCells cells, int[][] chains, Boundary boundary) {
+        this.poset = poset;
+        this.cells = cells;
+        this.chains = chains;
+        this.boundary = boundary;
+        this.coboundary = new CoboundaryCache(boundary);
     }
 
-    /** The order complex of {@code poset}. */
+    /**
+     * The order complex of {@code poset}, with at most {@link #DEFAULT_CELL_LIMIT} cells.
+     *
+     * @throws IllegalStateException if the poset has more chains than that
+     */
     public static OrderComplex of(Poset poset) {
-        int n = poset.size();
-        int[] extension = poset.linearExtension();
-        int[] position = poset.linearExtensionPositions();
-        String[] labels = new String[n];
-        for (int i = 0; i < n; i++) {
-            labels[i] = poset.label(extension[i]);
-        }
-        List<int[]> maximalChains = new ArrayList<>();
-        Adjacency up = poset.upperCovers();
-        for (int x = 0; x < n; x++) {
-            if (poset.lowerCovers().degree(x) == 0) {
-                IntArrayList chain = new IntArrayList();
-                chain.add(position[x]);
-                extend(x, chain, up, position, maximalChains);
-            }
-        }
-        return new OrderComplex(new SimplicialComplex(labels, maximalChains, ComplexKind.ORDER, " < "));
+        return of(poset, DEFAULT_CELL_LIMIT);
     }
 
-    private static void extend(int top, IntArrayList chain, Adjacency up, int[] position, List<int[]> out) {
-        if (up.degree(top) == 0) {
-            out.add(chain.toIntArray());
-            return;
-        }
-        for (int i = up.start(top); i < up.end(top); i++) {
-            int y = up.target(i);
-            chain.add(position[y]);
-            extend(y, chain, up, position, out);
-            chain.removeInt(chain.size() - 1);
-        }
+    /**
+     * The order complex of {@code poset}. The chains are counted before any is listed, so a
+     * complex over the limit fails at once.
+     *
+     * @param maxCells the most cells (nonempty chains) allowed
+     * @throws IllegalStateException if the poset has more than {@code maxCells} nonempty chains
+     */
+    public static OrderComplex of(Poset poset, long maxCells) {
+        ChainEnumerator enumerator = new ChainEnumerator(poset, CellLimits.validLimit(maxCells));
+        Boundary boundary = enumerator.run();
+        return new OrderComplex(poset, new GradedCells(enumerator.counts()), enumerator.chains(), boundary);
+    }
+
+    /** The poset whose chains these are. */
+    public Poset poset() {
+        return poset;
+    }
+
+    /** The chain's elements, ascending in the order (bottom first). A copy. */
+    public int[] chain(int cell) {
+        int d = cells.dimensionOf(cell);
+        int local = cell - cells.firstCell(d);
+        return Arrays.copyOfRange(chains[d], local * (d + 1), (local + 1) * (d + 1));
     }
 
     @Override
@@ -62,41 +73,57 @@ public final class OrderComplex implements ChainComplex {
 
     @Override
     public int dimension() {
-        return simplices.dimension();
+        return cells.dimension();
     }
 
     @Override
     public int cellCount() {
-        return simplices.cellCount();
+        return cells.cellCount();
     }
 
     @Override
     public int cellCount(int d) {
-        return simplices.cellCount(d);
+        return cells.cellCount(d);
     }
 
     @Override
     public int firstCell(int d) {
-        return simplices.firstCell(d);
+        return cells.firstCell(d);
     }
 
     @Override
     public int dimensionOf(int cell) {
-        return simplices.dimensionOf(cell);
+        return cells.dimensionOf(cell);
     }
 
     @Override
     public Boundary boundary() {
-        return simplices.boundary();
+        return boundary;
     }
 
     @Override
     public Boundary coboundary() {
-        return simplices.coboundary();
+        return coboundary.get();
     }
 
+    /** The chain's labels joined bottom first, like {@code a<b<c}. */
     @Override
     public String cellName(int cell) {
-        return simplices.cellName(cell);
+        int d = cells.dimensionOf(cell);
+        int at = (cell - cells.firstCell(d)) * (d + 1);
+        StringBuilder name = new StringBuilder();
+        for (int i = 0; i <= d; i++) {
+            if (i > 0) {
+                name.append('<');
+            }
+            name.append(poset.label(chains[d][at + i]));
+        }
+        return name.toString();
+    }
+
+    /** The chain itself, so lexicographic matchings follow chains. */
+    @Override
+    public int[] vertexTuple(int cell) {
+        return chain(cell);
     }
 }

@@ -1,132 +1,170 @@
 package dev.morse.complex;
 
-import it.unimi.dsi.fastutil.ints.IntArrayList;
-import it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap;
-import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.List;
 
 /**
- * The simplicial complex of all nonempty subsets of listed faces, with the alternating-sign
- * boundary {@code ∂[v0..vd] = Σ (-1)^i [v0..^vi..vd]} (common practice; Munkres, Elements of
- * Algebraic Topology, 1984, §5). Each simplex is its ascending vertex ids; simplices are numbered by
- * dimension, lexicographically within a dimension.
+ * The simplicial complex whose faces are all nonempty subsets of the listed faces, each simplex
+ * once. Cells are numbered by dimension and, within a dimension, in lexicographic order of their
+ * ascending vertex ids. The boundary is {@code Σ (-1)^i [v0 .. v̂i .. vd]} with
+ * {@code v0 < ... < vd} (orientation by vertex order).
  *
- * <p>Memory: per d-simplex 4(d+1) bytes of vertices, 4 bytes of offsets, and 8(d+1) bytes of
- * boundary plus as much again for the coboundary.
+ * <p>The faces are found from the top down: the faces of dimension d are the listed ones of that
+ * size together with the facets of the d+1 dimensional faces, deduplicated in a hash table, so
+ * the work is proportional to the boundary entries however much the listed faces overlap.
+ *
+ * <p>Memory: a cell of dimension d costs {@code 4(d+1)} bytes for its vertices and
+ * {@code 4 + 8(d+1)} for its boundary row, {@code 12(d+1) + 4} bytes in all, and about as much
+ * again for the coboundary once it is requested.
  */
 public final class SimplicialComplex implements ChainComplex {
-    private static final int LARGEST_FACE = 30;
+    /** The default bound on the number of cells: every cell id must be an int. */
+    public static final long DEFAULT_CELL_LIMIT = CellLimits.MAX_ARRAY;
 
-    private final ComplexKind kind;
-    private final String separator;
-    private final String[] vertexLabels;
+    private final Facets facets;
     private final GradedCells cells;
-    private final int[] vertexOffsets;
-    private final int[] vertices;
+    private final int[][] simplices;
     private final Boundary boundary;
-    private final Boundary coboundary;
+    private final CoboundaryCache coboundary;
 
-    SimplicialComplex(String[] vertexLabels, List<int[]> faces, ComplexKind kind, String separator) {
-        this.kind = kind;
-        this.separator = separator;
-        this.vertexLabels = vertexLabels.clone();
-        List<List<IntArrayList>> byDimension = allSubsets(faces);
-        int[] counts = new int[byDimension.size()];
-        for (int d = 0; d < counts.length; d++) {
-            counts[d] = byDimension.get(d).size();
-        }
-        this.cells = new GradedCells(counts);
-        int total = cells.cellCount();
-        this.vertexOffsets = new int[total + 1];
-        IntArrayList flat = new IntArrayList();
-        List<Object2IntOpenHashMap<IntArrayList>> ids = new ArrayList<>();
-        int cell = 0;
-        for (int d = 0; d < byDimension.size(); d++) {
-            Object2IntOpenHashMap<IntArrayList> index = new Object2IntOpenHashMap<>();
-            for (IntArrayList simplex : byDimension.get(d)) {
-                index.put(simplex, cell);
-                flat.addAll(simplex);
-                vertexOffsets[++cell] = flat.size();
-            }
-            ids.add(index);
-        }
-        this.vertices = flat.toIntArray();
-        this.boundary = buildBoundary(ids);
-        this.coboundary = boundary.transpose(total);
+    private SimplicialComplex(Facets facets, GradedCells cells, int[][] simplices, Boundary boundary) {
+        this.facets = facets;
+        this.cells = cells;
+        this.simplices = simplices;
+        this.boundary = boundary;
+        this.coboundary = new CoboundaryCache(boundary);
     }
 
-    /** The complex of all faces of the listed faces. */
+    /**
+     * All nonempty subsets of the listed faces, with at most {@link #DEFAULT_CELL_LIMIT} cells.
+     *
+     * @throws IllegalStateException if there are more faces than that
+     */
     public static SimplicialComplex of(Facets facets) {
-        String[] labels = new String[facets.vertexCount()];
-        for (int v = 0; v < labels.length; v++) {
-            labels[v] = facets.vertexLabel(v);
-        }
-        List<int[]> faces = new ArrayList<>();
+        return of(facets, DEFAULT_CELL_LIMIT);
+    }
+
+    /**
+     * All nonempty subsets of the listed faces.
+     *
+     * @param maxCells the most faces allowed
+     * @throws IllegalStateException if the complex has more than {@code maxCells} faces
+     */
+    public static SimplicialComplex of(Facets facets, long maxCells) {
+        long limit = CellLimits.validLimit(maxCells);
+        int largest = 0;
         for (int f = 0; f < facets.faceCount(); f++) {
-            faces.add(facets.face(f));
+            largest = Math.max(largest, facets.faceSize(f));
         }
-        return new SimplicialComplex(labels, faces, ComplexKind.SIMPLICIAL, " ");
+        if (largest >= 62 || (1L << largest) - 1 > limit) {
+            throw new IllegalStateException("a listed face has " + largest + " vertices, so the complex has at least 2^"
+                    + largest + " - 1 faces, more than the limit of " + limit);
+        }
+        TupleTable[] tables = faceTables(facets, largest, limit);
+        int top = largest - 1;
+        int[] counts = new int[largest];
+        int[][] simplices = new int[largest][];
+        for (int d = 0; d <= top; d++) {
+            tables[d].sortLexicographically();
+            counts[d] = tables[d].size();
+            simplices[d] = tables[d].toFlatArray();
+        }
+        Boundary boundary = boundaryOf(tables, simplices, counts);
+        return new SimplicialComplex(facets, new GradedCells(counts), simplices, boundary);
     }
 
-    private static List<List<IntArrayList>> allSubsets(List<int[]> faces) {
-        List<java.util.Set<IntArrayList>> sets = new ArrayList<>();
-        for (int[] face : faces) {
-            if (face.length > LARGEST_FACE) {
-                throw new IllegalArgumentException("a face of " + face.length
-                        + " vertices is too large to list all its subsets");
-            }
-            int[] sorted = face.clone();
-            Arrays.sort(sorted);
-            while (sets.size() < sorted.length) {
-                sets.add(new java.util.HashSet<>());
-            }
-            for (int mask = 1; mask < (1 << sorted.length); mask++) {
-                IntArrayList subset = new IntArrayList(Integer.bitCount(mask));
-                for (int i = 0; i < sorted.length; i++) {
-                    if ((mask & (1 << i)) != 0) {
-                        subset.add(sorted[i]);
-                    }
-                }
-                sets.get(subset.size() - 1).add(subset);
-            }
+    private static TupleTable[] faceTables(Facets facets, int largest, long limit) {
+        int[] listed = new int[largest + 1];
+        for (int f = 0; f < facets.faceCount(); f++) {
+            listed[facets.faceSize(f)]++;
         }
-        List<List<IntArrayList>> sorted = new ArrayList<>();
-        for (java.util.Set<IntArrayList> set : sets) {
-            List<IntArrayList> list = new ArrayList<>(set);
-            list.sort(IntArrayList::compareTo);
-            sorted.add(list);
+        TupleTable[] tables = new TupleTable[largest];
+        for (int d = 0; d < largest; d++) {
+            tables[d] = new TupleTable(d + 1, listed[d + 1]);
         }
-        return sorted;
-    }
-
-    private Boundary buildBoundary(List<Object2IntOpenHashMap<IntArrayList>> ids) {
-        int total = cells.cellCount();
-        int[] offsets = new int[total + 1];
-        IntArrayList targets = new IntArrayList();
-        IntArrayList coefficients = new IntArrayList();
-        for (int c = 0; c < total; c++) {
-            int d = vertexOffsets[c + 1] - vertexOffsets[c] - 1;
-            if (d > 0) {
+        for (int f = 0; f < facets.faceCount(); f++) {
+            int[] face = facets.face(f);
+            Arrays.sort(face);
+            tables[face.length - 1].add(face, 0);
+        }
+        long total = largest == 0 ? 0 : tables[largest - 1].size();
+        int[] face = new int[largest];
+        for (int d = largest - 1; d >= 1; d--) {
+            TupleTable upper = tables[d];
+            int[] flat = upper.backingArray(); // upper is complete: only the table below grows
+            for (int s = 0; s < upper.size(); s++) {
+                int at = s * (d + 1);
                 for (int i = 0; i <= d; i++) {
-                    IntArrayList face = new IntArrayList(d);
-                    for (int j = 0; j <= d; j++) {
-                        if (j != i) {
-                            face.add(vertices[vertexOffsets[c] + j]);
-                        }
-                    }
-                    targets.add(ids.get(d - 1).getInt(face));
-                    coefficients.add(i % 2 == 0 ? 1 : -1);
+                    copyWithout(flat, at, d + 1, i, face);
+                    tables[d - 1].add(face, 0);
                 }
             }
-            offsets[c + 1] = targets.size();
+            total += tables[d - 1].size();
+            if (total > limit) {
+                throw new IllegalStateException("the simplicial complex has more than the limit of " + limit + " faces");
+            }
         }
-        return new Boundary(offsets, targets.toIntArray(), coefficients.toIntArray());
+        return tables;
+    }
+
+    private static Boundary boundaryOf(TupleTable[] tables, int[][] simplices, int[] counts) {
+        long cellTotal = 0;
+        long entryTotal = 0;
+        for (int d = 0; d < counts.length; d++) {
+            cellTotal += counts[d];
+            if (d > 0) {
+                entryTotal += (long) counts[d] * (d + 1);
+            }
+        }
+        if (entryTotal > CellLimits.MAX_ARRAY) {
+            throw new IllegalStateException("the simplicial complex has more boundary entries than one array holds");
+        }
+        int[] offsets = new int[(int) cellTotal + 1];
+        int[] targets = new int[(int) entryTotal];
+        int[] coefficients = new int[(int) entryTotal];
+        int cell = counts.length == 0 ? 0 : counts[0]; // vertices have empty boundaries
+        int entry = 0;
+        int firstBelow = 0;
+        int[] face = new int[counts.length];
+        for (int d = 1; d < counts.length; d++) {
+            int[] flat = simplices[d];
+            for (int s = 0; s < counts[d]; s++) {
+                for (int i = 0; i <= d; i++) {
+                    copyWithout(flat, s * (d + 1), d + 1, i, face);
+                    targets[entry] = firstBelow + tables[d - 1].find(face, 0);
+                    coefficients[entry] = (i & 1) == 0 ? 1 : -1;
+                    entry++;
+                }
+                offsets[++cell] = entry;
+            }
+            firstBelow += counts[d - 1];
+        }
+        return new Boundary(offsets, targets, coefficients);
+    }
+
+    private static void copyWithout(int[] source, int from, int length, int skip, int[] into) {
+        int k = 0;
+        for (int t = 0; t < length; t++) {
+            if (t != skip) {
+                into[k++] = source[from + t];
+            }
+        }
+    }
+
+    /** The listed faces this complex was built from. */
+    public Facets facets() {
+        return facets;
+    }
+
+    /** The simplex's vertex ids, ascending. A copy. */
+    public int[] simplex(int cell) {
+        int d = cells.dimensionOf(cell);
+        int local = cell - cells.firstCell(d);
+        return Arrays.copyOfRange(simplices[d], local * (d + 1), (local + 1) * (d + 1));
     }
 
     @Override
     public ComplexKind kind() {
-        return kind;
+        return ComplexKind.SIMPLICIAL;
     }
 
     @Override
@@ -161,18 +199,27 @@ public final class SimplicialComplex implements ChainComplex {
 
     @Override
     public Boundary coboundary() {
-        return coboundary;
+        return coboundary.get();
     }
 
+    /** The vertex labels in braces, ascending by vertex id, like <code>{a b c}</code>. */
     @Override
     public String cellName(int cell) {
-        StringBuilder name = new StringBuilder();
-        for (int i = vertexOffsets[cell]; i < vertexOffsets[cell + 1]; i++) {
-            if (i > vertexOffsets[cell]) {
-                name.append(separator);
+        int d = cells.dimensionOf(cell);
+        int at = (cell - cells.firstCell(d)) * (d + 1);
+        StringBuilder name = new StringBuilder("{");
+        for (int i = 0; i <= d; i++) {
+            if (i > 0) {
+                name.append(' ');
             }
-            name.append(vertexLabels[vertices[i]]);
+            name.append(facets.vertexLabel(simplices[d][at + i]));
         }
-        return kind == ComplexKind.SIMPLICIAL ? "{" + name + "}" : name.toString();
+        return name.append('}').toString();
+    }
+
+    /** The vertex ids, so lexicographic matchings follow simplices. */
+    @Override
+    public int[] vertexTuple(int cell) {
+        return simplex(cell);
     }
 }

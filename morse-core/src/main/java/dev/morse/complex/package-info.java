@@ -1,5 +1,5 @@
 /**
  * Chain complexes with graded cells and sparse integer boundaries: the order complex of a poset,
- * the cellular complex of a CW poset, and simplicial complexes.
+ * the cellular complex of a CW poset (with the check that recognises one), and simplicial complexes.
  */
 package dev.morse.complex;

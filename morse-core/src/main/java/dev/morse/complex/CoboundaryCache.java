@@ -1,0 +1,28 @@
+package dev.morse.complex;
+
+/**
+ * Computes a coboundary (the transpose of a boundary) on first request and keeps it. Many callers
+ * only need the boundary, so the transpose is not paid for up front. Thread-safe.
+ */
+final class CoboundaryCache {
+    private final Boundary boundary;
+    private volatile Boundary coboundary;
+
+    CoboundaryCache(Boundary boundary) {
+        this.boundary = boundary;
+    }
+
+    Boundary get() {
+        Boundary result = coboundary;
+        if (result == null) {
+            synchronized (this) {
+                result = coboundary;
+                if (result == null) {
+                    result = boundary.transpose(boundary.cellCount());
+                    coboundary = result;
+                }
+            }
+        }
+        return result;
+    }
+}

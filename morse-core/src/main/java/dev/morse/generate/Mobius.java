@@ -1,0 +1,54 @@
+package dev.morse.generate;
+
+import dev.morse.poset.Poset;
+
+/**
+ * The Möbius function of a bounded poset from its defining recursion {@code μ(0̂,0̂) = 1},
+ * {@code μ(0̂,x) = -Σ_{0̂ ≤ z < x} μ(0̂,z)} (Rota 1964; Stanley, Enumerative Combinatorics I, Ch. 3).
+ * Exact: an overflow of {@code long} throws.
+ */
+public final class Mobius {
+    private Mobius() {
+    }
+
+    /**
+     * {@code μ(0̂, 1̂)} of a poset with a unique minimal and a unique maximal element.
+     *
+     * @throws IllegalArgumentException if {@code poset} is not bounded
+     */
+    public static long bottomToTop(Poset poset) {
+        int bottom = -1;
+        int top = -1;
+        for (int x = 0; x < poset.size(); x++) {
+            if (poset.lowerCovers().degree(x) == 0) {
+                if (bottom >= 0) {
+                    throw new IllegalArgumentException("more than one minimal element");
+                }
+                bottom = x;
+            }
+            if (poset.upperCovers().degree(x) == 0) {
+                if (top >= 0) {
+                    throw new IllegalArgumentException("more than one maximal element");
+                }
+                top = x;
+            }
+        }
+        if (bottom < 0) {
+            throw new IllegalArgumentException("empty poset");
+        }
+        DownSets downSets = DownSets.of(poset);
+        long[] mu = new long[poset.size()];
+        for (int x : poset.linearExtension()) {
+            if (x == bottom) {
+                mu[x] = 1;
+                continue;
+            }
+            long sum = 0;
+            for (int z : downSets.elementsBelow(x)) {
+                sum = Math.addExact(sum, mu[z]);
+            }
+            mu[x] = Math.negateExact(sum);
+        }
+        return mu[top];
+    }
+}

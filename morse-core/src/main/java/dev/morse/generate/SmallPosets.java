@@ -1,0 +1,49 @@
+package dev.morse.generate;
+
+import dev.morse.poset.Poset;
+import dev.morse.poset.PosetBuilder;
+
+/** Chains and antichains: the building blocks of cones, suspensions and joins. */
+public final class SmallPosets {
+    private SmallPosets() {
+    }
+
+    /** The chain {@code c1 < c2 < ... < ck}; its order complex is a (k-1)-simplex, contractible. */
+    public static Poset chain(int k) {
+        return chain(k, "c");
+    }
+
+    /** The chain of {@code k} elements labelled {@code prefix1 < prefix2 < ...}. */
+    public static Poset chain(int k, String prefix) {
+        requirePositive(k);
+        PosetBuilder b = new PosetBuilder();
+        for (int i = 1; i <= k; i++) {
+            int x = b.element(Built.checkLabel(prefix + i));
+            if (i > 1) {
+                b.relate(x - 1, x, 0);
+            }
+        }
+        return Built.poset(b);
+    }
+
+    /** {@code k} pairwise incomparable elements {@code a1 .. ak}; two of them form the sphere S^0. */
+    public static Poset antichain(int k) {
+        return antichain(k, "a");
+    }
+
+    /** {@code k} pairwise incomparable elements labelled {@code prefix1 .. prefixk}. */
+    public static Poset antichain(int k, String prefix) {
+        requirePositive(k);
+        PosetBuilder b = new PosetBuilder();
+        for (int i = 1; i <= k; i++) {
+            b.element(Built.checkLabel(prefix + i));
+        }
+        return Built.poset(b);
+    }
+
+    private static void requirePositive(int k) {
+        if (k < 1) {
+            throw new IllegalArgumentException("need at least one element, got " + k);
+        }
+    }
+}

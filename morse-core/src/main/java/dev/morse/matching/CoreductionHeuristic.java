@@ -1,0 +1,95 @@
+package dev.morse.matching;
+
+import dev.morse.complex.Boundary;
+import dev.morse.complex.ChainComplex;
+import it.unimi.dsi.fastutil.ints.IntArrayFIFOQueue;
+import java.util.Arrays;
+
+/**
+ * The coreduction method of Mrozek and Batko ("Coreduction homology algorithm", Discrete Comput.
+ * Geom. 41, 2009): a cell whose boundary, within the cells not yet removed, is exactly one face with
+ * a unit incidence forms a coreduction pair with that face, and both are removed. Candidates wait in
+ * a queue fed by the cofaces of removed cells; only when the queue runs dry is a cell declared
+ * critical, and then always one of lowest dimension among those left (it has an empty boundary
+ * there).
+ *
+ * <p>The pairs form an acyclic matching: along a gradient path each step reaches a pair removed
+ * strictly earlier, since the coface of a pair had no other face left at its removal.
+ * Linear time; 9 bytes per cell of working memory besides the coboundary.
+ */
+public final class CoreductionHeuristic implements MatchingHeuristic {
+    @Override
+    public String name() {
+        return "coreduction";
+    }
+
+    @Override
+    public Matching match(ChainComplex complex, MatchingOptions options) {
+        int n = complex.cellCount();
+        Boundary boundary = complex.boundary();
+        Boundary coboundary = complex.coboundary();
+        int[] mates = new int[n];
+        Arrays.fill(mates, Matching.CRITICAL);
+        boolean[] removed = new boolean[n];
+        int[] facesLeft = new int[n];
+        for (int c = 0; c < n; c++) {
+            facesLeft[c] = boundary.size(c);
+        }
+        IntArrayFIFOQueue queue = new IntArrayFIFOQueue();
+        // cells are numbered by dimension, so the first cell left is one of lowest dimension
+        for (int next = 0; next < n; next++) {
+            if (removed[next]) {
+                continue;
+            }
+            remove(next, removed, facesLeft, coboundary, queue);
+            while (!queue.isEmpty()) {
+                int s = queue.dequeueInt();
+                if (removed[s]) {
+                    continue;
+                }
+                if (facesLeft[s] == 0) {
+                    enqueueCofaces(s, removed, coboundary, queue);
+                } else if (facesLeft[s] == 1) {
+                    int entry = lastFaceEntry(s, removed, boundary);
+                    int coefficient = boundary.coefficient(entry);
+                    if (coefficient == 1 || coefficient == -1) {
+                        int t = boundary.target(entry);
+                        mates[s] = t;
+                        mates[t] = s;
+                        remove(s, removed, facesLeft, coboundary, queue);
+                        remove(t, removed, facesLeft, coboundary, queue);
+                    }
+                }
+            }
+        }
+        return Matching.adopt(mates);
+    }
+
+    private static void remove(int c, boolean[] removed, int[] facesLeft, Boundary coboundary, IntArrayFIFOQueue queue) {
+        removed[c] = true;
+        for (int i = coboundary.start(c); i < coboundary.end(c); i++) {
+            int b = coboundary.target(i);
+            if (!removed[b]) {
+                facesLeft[b]--;
+                queue.enqueue(b);
+            }
+        }
+    }
+
+    private static void enqueueCofaces(int c, boolean[] removed, Boundary coboundary, IntArrayFIFOQueue queue) {
+        for (int i = coboundary.start(c); i < coboundary.end(c); i++) {
+            if (!removed[coboundary.target(i)]) {
+                queue.enqueue(coboundary.target(i));
+            }
+        }
+    }
+
+    private static int lastFaceEntry(int s, boolean[] removed, Boundary boundary) {
+        for (int i = boundary.start(s); i < boundary.end(s); i++) {
+            if (!removed[boundary.target(i)]) {
+                return i;
+            }
+        }
+        throw new IllegalStateException("face count out of step with the boundary");
+    }
+}

@@ -1,0 +1,12 @@
+package dev.morse.matching;
+
+import dev.morse.complex.ChainComplex;
+
+/** A way to pair cells of a chain complex. Implementations keep no state between calls. */
+public interface MatchingHeuristic {
+    /** The name users type after {@code --matching}. */
+    String name();
+
+    /** Pairs cells of {@code complex}; the result must pass {@link MatchingVerifier}. */
+    Matching match(ChainComplex complex, MatchingOptions options);
+}

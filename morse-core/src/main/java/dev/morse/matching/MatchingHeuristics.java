@@ -1,0 +1,44 @@
+package dev.morse.matching;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.ServiceLoader;
+
+/**
+ * The heuristics known by name: the built-in ones, then any registered through
+ * {@link ServiceLoader} as implementations of {@link MatchingHeuristic} on the class path.
+ */
+public final class MatchingHeuristics {
+    /** The heuristic used when none is named. */
+    public static final String DEFAULT = "coreduction";
+
+    private MatchingHeuristics() {
+    }
+
+    /** All heuristics by name, built-ins first. A fresh unmodifiable map each call. */
+    public static Map<String, MatchingHeuristic> all() {
+        Map<String, MatchingHeuristic> byName = new LinkedHashMap<>();
+        for (MatchingHeuristic h : List.of(new CoreductionHeuristic(), new CollapseHeuristic(),
+                new LexicographicHeuristic(), new RandomHeuristic(), new NoMatchingHeuristic())) {
+            byName.put(h.name(), h);
+        }
+        for (MatchingHeuristic h : ServiceLoader.load(MatchingHeuristic.class)) {
+            byName.putIfAbsent(h.name(), h);
+        }
+        return Collections.unmodifiableMap(byName);
+    }
+
+    /** The heuristic with this name, if any. */
+    public static Optional<MatchingHeuristic> byName(String name) {
+        return Optional.ofNullable(all().get(name));
+    }
+
+    /** The names on offer, in order. */
+    public static List<String> names() {
+        return new ArrayList<>(all().keySet());
+    }
+}

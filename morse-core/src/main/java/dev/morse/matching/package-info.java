@@ -1,0 +1,5 @@
+/**
+ * Acyclic matchings on the Hasse diagram of a chain complex's cells: the heuristics that build them
+ * and an independent verifier that checks them.
+ */
+package dev.morse.matching;

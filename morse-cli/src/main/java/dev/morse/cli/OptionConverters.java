@@ -5,7 +5,6 @@ import dev.morse.homology.Coefficients;
 import dev.morse.pipeline.HomologyPipeline;
 import java.util.Iterator;
 import java.util.List;
-import java.util.Locale;
 import java.util.stream.Stream;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
@@ -15,16 +14,15 @@ final class OptionConverters {
     private OptionConverters() {
     }
 
-    /** {@code auto}, {@code order} or {@code cellular}, in any case. */
+    /** {@code auto}, {@code order} or {@code cellular}. */
     static final class ComplexConverter implements ITypeConverter<ComplexChoice> {
         @Override
         public ComplexChoice convert(String value) {
-            for (ComplexChoice choice : ComplexChoice.values()) {
-                if (choice.name().equalsIgnoreCase(value)) {
-                    return choice;
-                }
+            try {
+                return ComplexChoice.parse(value);
+            } catch (IllegalArgumentException e) {
+                throw new TypeConversionException(e.getMessage());
             }
-            throw new TypeConversionException("'" + value + "' is not a complex; choose auto, order or cellular");
         }
     }
 
@@ -32,7 +30,7 @@ final class OptionConverters {
     static final class ComplexNames implements Iterable<String> {
         @Override
         public Iterator<String> iterator() {
-            return Stream.of(ComplexChoice.values()).map(c -> c.name().toLowerCase(Locale.ROOT)).iterator();
+            return Stream.of(ComplexChoice.values()).map(ComplexChoice::optionName).iterator();
         }
     }
 

@@ -129,7 +129,7 @@ public final class HomologyPipeline {
             throw new InputException(source, InputException.NO_LINE,
                     "the cellular complex needs a CW poset, and this is not one: " + verdict.orElseThrow().reason());
         }
-        ChainComplex complex = cellular ? CellularComplex.of(poset) : OrderComplex.of(poset);
+        ChainComplex complex = cellular ? CellularComplex.of(poset) : orderComplex(source, poset);
         return finish(source, InputFormat.POSET, complex, verdict, options, read, PhaseTiming.since(COMPLEX, start));
     }
 
@@ -139,9 +139,27 @@ public final class HomologyPipeline {
                     "a simplicial file has only its own complex; the choice of complex applies to poset files");
         }
         long start = System.nanoTime();
-        ChainComplex complex = SimplicialComplex.of(facets);
+        ChainComplex complex;
+        try {
+            complex = SimplicialComplex.of(facets);
+        } catch (IllegalStateException e) {
+            throw tooLarge(source, e);
+        }
         return finish(source, InputFormat.SIMPLICIAL, complex, Optional.empty(), options, read,
                 PhaseTiming.since(COMPLEX, start));
+    }
+
+    /** The order complex; the complexes report too many cells by an IllegalStateException before building any. */
+    private static ChainComplex orderComplex(String source, Poset poset) {
+        try {
+            return OrderComplex.of(poset);
+        } catch (IllegalStateException e) {
+            throw tooLarge(source, e);
+        }
+    }
+
+    private static InputException tooLarge(String source, IllegalStateException e) {
+        return new InputException(source, InputException.NO_LINE, "too large to compute: " + e.getMessage());
     }
 
     private static HomologyReport finish(String source, InputFormat format, ChainComplex complex,

@@ -20,8 +20,8 @@ import java.util.List;
  * Writes a {@link HomologyReport} as one JSON object with the fields fixed by the design
  * ({@code complex, cells, matching, critical, coefficients, homology}) and these of ours:
  * {@code input}, {@code format} ({@code poset} or {@code simplicial}), {@code reduced},
- * {@code cw_check} ({@code {"cw_poset": bool, "reason": text}}, or {@code null} when no check was
- * made) and {@code timings_ms} (phase name to milliseconds). Torsion factors are JSON integers of
+ * {@code cw_check} ({@code {"cw_poset": bool}}, with {@code "reason": text} when the check gave
+ * one, or {@code null} when no check was made) and {@code timings_ms} (phase name to milliseconds). Torsion factors are JSON integers of
  * any size. Streams through Jackson's {@link JsonGenerator}; holds nothing.
  */
 public final class JsonReportWriter {
@@ -110,7 +110,9 @@ public final class JsonReportWriter {
         CwPosetVerdict verdict = report.cwCheck().get();
         json.writeStartObject();
         json.writeBooleanField("cw_poset", verdict.isCwPoset());
-        json.writeStringField("reason", verdict.reason());
+        if (!verdict.reason().isEmpty()) {
+            json.writeStringField("reason", verdict.reason());
+        }
         json.writeEndObject();
     }
 

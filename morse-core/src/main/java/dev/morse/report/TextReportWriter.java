@@ -67,7 +67,7 @@ public final class TextReportWriter {
     private static String complexLine(HomologyReport report) {
         String reason = report.cwCheck().map(CwPosetVerdict::reason).orElse("");
         if (report.complex() == ComplexKind.CELLULAR) {
-            return "cellular, one cell per element: a CW poset (" + reason + ")";
+            return "cellular, one cell per element: a CW poset" + (reason.isEmpty() ? "" : " (" + reason + ")");
         }
         if (report.complex() == ComplexKind.ORDER) {
             return report.cwCheck().isEmpty()

@@ -1,9 +1,8 @@
 package dev.morse.report;
 
-import dev.morse.complex.ComplexKind;
-import dev.morse.complex.CwPosetVerdict;
 import dev.morse.homology.Coefficients;
 import dev.morse.homology.HomologyGroup;
+import dev.morse.io.InputFormat;
 import java.math.BigInteger;
 import java.util.List;
 import java.util.Locale;
@@ -11,7 +10,7 @@ import java.util.StringJoiner;
 
 /**
  * Writes a {@link HomologyReport} for people: a short two-column table saying which complex was
- * built and why, its cells, the matching, one line per homology group such as
+ * built and, for a poset, why; its cells, the matching, one line per homology group such as
  * {@code H_1 = Z^2 + Z/2}, and the time each phase took.
  */
 public final class TextReportWriter {
@@ -26,6 +25,10 @@ public final class TextReportWriter {
         text.append(String.format(Locale.ROOT, "%s (%s file)\n", report.input(),
                 report.format().name().toLowerCase(Locale.ROOT)));
         row(text, "complex", complexLine(report));
+        String choice = choiceLine(report);
+        if (choice != null) {
+            row(text, "why", choice);
+        }
         row(text, "cells", countsLine(report.cells()));
         row(text, "matching", matchingLine(report));
         row(text, "homology", (report.reduced() ? "reduced, " : "") + "coefficients " + ringName(report.coefficients()));
@@ -65,16 +68,21 @@ public final class TextReportWriter {
     }
 
     private static String complexLine(HomologyReport report) {
-        String reason = report.cwCheck().map(CwPosetVerdict::reason).orElse("");
-        if (report.complex() == ComplexKind.CELLULAR) {
-            return "cellular, one cell per element: a CW poset" + (reason.isEmpty() ? "" : " (" + reason + ")");
+        return switch (report.complex()) {
+            case CELLULAR -> "cellular, one cell per element of the poset";
+            case ORDER -> "order complex, one simplex per chain of the poset";
+            case SIMPLICIAL -> "simplicial, all faces of the listed faces";
+        };
+    }
+
+    /** Why this complex was built, when there was a choice. */
+    private static String choiceLine(HomologyReport report) {
+        if (report.format() != InputFormat.POSET) {
+            return null;
         }
-        if (report.complex() == ComplexKind.ORDER) {
-            return report.cwCheck().isEmpty()
-                    ? "order complex, one simplex per chain (CW check not made)"
-                    : "order complex, one simplex per chain: not a CW poset (" + reason + ")";
-        }
-        return "simplicial, all faces of the listed faces";
+        return report.cwCheck()
+                .map(v -> v.isCwPoset() ? "the poset is a CW poset" : "not a CW poset: " + v.reason())
+                .orElse("chosen without checking for a CW poset");
     }
 
     private static String countsLine(List<Integer> counts) {

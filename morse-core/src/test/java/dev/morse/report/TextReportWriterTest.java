@@ -45,7 +45,7 @@ class TextReportWriterTest {
                 "none", List.of(2, 1), homology, Optional.of(new CwPosetVerdict(false, "an edge with one end")),
                 List.of());
         String text = TextReportWriter.toText(report);
-        assertTrue(text.contains("not a CW poset (an edge with one end)"), text);
+        assertTrue(text.contains("  why       not a CW poset: an edge with one end\n"), text);
         assertTrue(text.contains("~H_0 = 0"), text);
         assertTrue(text.contains("reduced"), text);
     }

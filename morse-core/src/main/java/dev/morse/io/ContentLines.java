@@ -10,6 +10,8 @@ import java.io.UncheckedIOException;
  * Streaming: holds one line at a time.
  */
 final class ContentLines {
+    private static final String BYTE_ORDER_MARK = "\uFEFF";
+
     private final BufferedReader reader;
     private final String source;
     private int lineNumber;
@@ -25,6 +27,10 @@ final class ContentLines {
             String line;
             while ((line = reader.readLine()) != null) {
                 lineNumber++;
+                if (lineNumber == 1 && line.startsWith(BYTE_ORDER_MARK)) {
+                    // some editors start UTF-8 files with an invisible byte order mark
+                    line = line.substring(1);
+                }
                 int hash = line.indexOf('#');
                 if (hash >= 0) {
                     line = line.substring(0, hash);
@@ -35,8 +41,9 @@ final class ContentLines {
                 }
             }
             return null;
-        } catch (java.nio.charset.MalformedInputException e) {
-            throw error("not valid UTF-8 text");
+        } catch (java.nio.charset.CharacterCodingException e) {
+            // the decoder runs ahead of the lines handed out, so no line number would be trustworthy
+            throw new InputException(source, InputException.NO_LINE, "not valid UTF-8 text");
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -49,7 +56,7 @@ final class ContentLines {
             throw new InputException(source, InputException.NO_LINE,
                     "no header: expected '" + kind + " " + version + "' as the first line");
         }
-        String[] words = header.split("\\s+");
+        String[] words = words(header);
         if (words.length == 2 && words[0].equals(kind) && !words[1].equals(version)) {
             throw error("unsupported version '" + words[1] + "' of " + kind + ": this program reads version " + version);
         }
@@ -73,8 +80,10 @@ final class ContentLines {
     }
 
     /**
-     * Splits on runs of white space; the line is already trimmed and non-empty. Scans by hand: a
-     * regular expression per line costs more than the rest of parsing on big files.
+     * Splits on runs of white space in the sense of {@link Character#isWhitespace}, the same sense
+     * in which {@link String#strip()} trims lines, so that no word ever contains white space; the
+     * line is already trimmed and non-empty. Scans by hand: a regular expression per line costs
+     * more than the rest of parsing on big files.
      */
     static String[] words(String line) {
         int count = 0;

@@ -1,4 +1,5 @@
 /**
- * Turning results into text and JSON for people and programs.
+ * The result of a homology run as an immutable value, and its renderings: a short text table for
+ * people and one JSON object for programs.
  */
 package dev.morse.report;

@@ -1,0 +1,66 @@
+package dev.morse.cli;
+
+import java.io.OutputStreamWriter;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Spec;
+
+/** The {@code morse} command: exact homology of posets and simplicial complexes. */
+@Command(name = "morse",
+        description = "Exact homology of posets (order complexes), CW posets (cellular complexes) and simplicial complexes.",
+        subcommands = {HomologyCommand.class, DemoCommand.class, CommandLine.HelpCommand.class},
+        footer = "%nExit codes: 0 success, 2 bad input or options, 1 internal failure.")
+public final class MorseCommand implements Callable<Integer> {
+    @Spec
+    private CommandSpec spec;
+
+    @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
+    private boolean help;
+
+    /** Runs the command line and exits with its exit code. */
+    public static void main(String[] args) {
+        PrintWriter out = new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
+        PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
+        int code;
+        try {
+            code = newCommandLine().setOut(out).setErr(err).execute(args);
+        } catch (OutOfMemoryError e) {
+            // picocli hands only Exceptions to the handlers; Errors arrive here
+            err.println("morse: out of memory; give the JVM more with JAVA_OPTS=-Xmx8g (or larger)");
+            code = Failures.INTERNAL_FAILURE;
+        } catch (Throwable e) {
+            err.println("morse: internal error: " + e);
+            if (List.of(args).contains("--debug")) {
+                e.printStackTrace(err);
+            }
+            code = Failures.INTERNAL_FAILURE;
+        }
+        out.flush();
+        err.flush();
+        System.exit(code);
+    }
+
+    /**
+     * A fresh command line with the shared failure handling installed. Set its output and error
+     * writers before executing: they propagate to the subcommands registered here.
+     */
+    public static CommandLine newCommandLine() {
+        Failures failures = new Failures();
+        return new CommandLine(new MorseCommand())
+                .setExecutionExceptionHandler(failures)
+                .setParameterExceptionHandler(failures);
+    }
+
+    /** Without a subcommand there is nothing to do: a usage error. */
+    @Override
+    public Integer call() {
+        throw new ParameterException(spec.commandLine(), "a subcommand is required: homology, demo or help");
+    }
+}

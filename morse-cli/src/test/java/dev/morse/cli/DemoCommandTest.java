@@ -1,0 +1,32 @@
+package dev.morse.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+
+class DemoCommandTest {
+    @Test
+    void demoRunsBothStoriesAndSucceeds() {
+        CliRun run = CliRun.morse("demo");
+        assertEquals(0, run.code(), run.err());
+        assertEquals("", run.err());
+        String out = run.out();
+        // the 4 x 4 map: 16 corners, 32 sides, 16 tiles on the torus (counted from its construction)
+        assertTrue(out.contains("64 = 16 + 32 + 16 in dimensions 0..2"), out);
+        // torus homology Z, Z^2, Z (REFERENCES.md)
+        assertTrue(out.contains("H_0 = Z\n") && out.contains("H_1 = Z^2\n") && out.contains("H_2 = Z\n"), out);
+        // chains of the face poset: 64 elements; 2 * 32 + 4 * 16 + 4 * 16 = 192 comparable pairs;
+        // 16 tiles * 4 sides * 2 ends = 128 flags
+        assertTrue(out.contains("has 384 simplices, 64 + 192 + 128 by dimension"), out);
+    }
+
+    @Test
+    void releasePlanHasOneLoop() {
+        // by hand: Δ is the hexagon of designs and builds with two cones, one on each release's lower set;
+        // the cones meet in two pieces (the path api-server-db and the vertex ui), so Δ is a circle: β = 1, 1, 0
+        String out = CliRun.morse("demo").out();
+        assertTrue(out.contains("cells     32 = 8 + 16 + 8 in dimensions 0..2"), out);
+        assertTrue(out.contains("Betti numbers [1, 1, 0]"), out);
+    }
+}

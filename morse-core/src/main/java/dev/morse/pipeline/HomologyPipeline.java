@@ -1,0 +1,181 @@
+package dev.morse.pipeline;
+
+import dev.morse.complex.CellularComplex;
+import dev.morse.complex.ChainComplex;
+import dev.morse.complex.ComplexChoice;
+import dev.morse.complex.CwPosetCheck;
+import dev.morse.complex.CwPosetVerdict;
+import dev.morse.complex.Facets;
+import dev.morse.complex.OrderComplex;
+import dev.morse.complex.SimplicialComplex;
+import dev.morse.homology.Homology;
+import dev.morse.homology.HomologyCalculator;
+import dev.morse.io.InputException;
+import dev.morse.io.InputFormat;
+import dev.morse.io.PosetReader;
+import dev.morse.io.SimplicialReader;
+import dev.morse.poset.Poset;
+import dev.morse.report.HomologyReport;
+import dev.morse.report.PhaseTiming;
+import java.io.IOException;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Runs homology on one input: detects the format from the header line, reads it, builds the chain
+ * complex (for a poset: the cellular complex when it is a CW poset and the choice allows, else the
+ * order complex), computes homology and returns a {@link HomologyReport} with the time of each
+ * phase ({@code read}, {@code complex}, {@code homology}). Stateless.
+ */
+public final class HomologyPipeline {
+    /** The matching name that means no Morse reduction: every cell is critical. */
+    public static final String NO_MATCHING = "none";
+
+    private static final List<String> MATCHINGS = List.of(NO_MATCHING);
+    private static final String READ = "read";
+    private static final String COMPLEX = "complex";
+    private static final String HOMOLOGY = "homology";
+
+    private HomologyPipeline() {
+    }
+
+    /** The names accepted as a matching, in the order to show them. */
+    public static List<String> matchingNames() {
+        return MATCHINGS;
+    }
+
+    /**
+     * Returns {@code name} if it names a matching.
+     *
+     * @throws IllegalArgumentException naming the available matchings otherwise
+     */
+    public static String requireKnownMatching(String name) {
+        if (name == null || !MATCHINGS.contains(name)) {
+            throw new IllegalArgumentException("unknown matching '" + name + "'; available: "
+                    + String.join(", ", MATCHINGS));
+        }
+        return name;
+    }
+
+    /**
+     * Runs on a file; its name appears in the report and in error messages as given.
+     *
+     * @throws InputException for bad input, including a missing or unreadable file
+     * @throws IOException when reading fails for another reason
+     */
+    public static HomologyReport run(Path file, HomologyOptions options) throws IOException {
+        String source = file.toString();
+        requireReadable(file);
+        long start = System.nanoTime();
+        try {
+            return switch (InputFormat.detect(file)) {
+                case POSET -> {
+                    Poset poset = PosetReader.read(file);
+                    yield fromPoset(source, poset, options, PhaseTiming.since(READ, start));
+                }
+                case SIMPLICIAL -> {
+                    Facets facets = SimplicialReader.read(file);
+                    yield fromFacets(source, facets, options, PhaseTiming.since(READ, start));
+                }
+            };
+        } catch (NoSuchFileException e) {
+            throw new InputException(source, InputException.NO_LINE, "no such file");
+        } catch (AccessDeniedException e) {
+            throw new InputException(source, InputException.NO_LINE, "cannot be read: permission denied");
+        }
+    }
+
+    /**
+     * Runs on text held in memory; {@code source} names it in the report and in error messages.
+     *
+     * @throws InputException for bad input
+     */
+    public static HomologyReport run(String source, String text, HomologyOptions options) {
+        long start = System.nanoTime();
+        return switch (InputFormat.detect(text, source)) {
+            case POSET -> {
+                Poset poset = PosetReader.parse(text, source);
+                yield fromPoset(source, poset, options, PhaseTiming.since(READ, start));
+            }
+            case SIMPLICIAL -> {
+                Facets facets = SimplicialReader.parse(text, source);
+                yield fromFacets(source, facets, options, PhaseTiming.since(READ, start));
+            }
+        };
+    }
+
+    private static void requireReadable(Path file) {
+        String source = file.toString();
+        if (!Files.exists(file)) {
+            throw new InputException(source, InputException.NO_LINE, "no such file");
+        }
+        if (Files.isDirectory(file)) {
+            throw new InputException(source, InputException.NO_LINE, "is a directory, not a file");
+        }
+    }
+
+    private static HomologyReport fromPoset(String source, Poset poset, HomologyOptions options, PhaseTiming read) {
+        long start = System.nanoTime();
+        Optional<CwPosetVerdict> verdict = options.complex() == ComplexChoice.ORDER
+                ? Optional.empty()
+                : Optional.of(CwPosetCheck.check(poset));
+        boolean cellular = verdict.map(CwPosetVerdict::isCwPoset).orElse(false);
+        if (options.complex() == ComplexChoice.CELLULAR && !cellular) {
+            throw new InputException(source, InputException.NO_LINE,
+                    "the cellular complex needs a CW poset, and this is not one: " + verdict.orElseThrow().reason());
+        }
+        ChainComplex complex = cellular ? CellularComplex.of(poset) : orderComplex(source, poset);
+        return finish(source, InputFormat.POSET, complex, verdict, options, read, PhaseTiming.since(COMPLEX, start));
+    }
+
+    private static HomologyReport fromFacets(String source, Facets facets, HomologyOptions options, PhaseTiming read) {
+        if (options.complex() != ComplexChoice.AUTO) {
+            throw new InputException(source, InputException.NO_LINE,
+                    "a simplicial file has only its own complex; the choice of complex applies to poset files");
+        }
+        long start = System.nanoTime();
+        ChainComplex complex;
+        try {
+            complex = SimplicialComplex.of(facets);
+        } catch (IllegalStateException e) {
+            throw tooLarge(source, e);
+        }
+        return finish(source, InputFormat.SIMPLICIAL, complex, Optional.empty(), options, read,
+                PhaseTiming.since(COMPLEX, start));
+    }
+
+    /** The order complex; the complexes report too many cells by an IllegalStateException before building any. */
+    private static ChainComplex orderComplex(String source, Poset poset) {
+        try {
+            return OrderComplex.of(poset);
+        } catch (IllegalStateException e) {
+            throw tooLarge(source, e);
+        }
+    }
+
+    private static InputException tooLarge(String source, IllegalStateException e) {
+        return new InputException(source, InputException.NO_LINE, "too large to compute: " + e.getMessage());
+    }
+
+    private static HomologyReport finish(String source, InputFormat format, ChainComplex complex,
+            Optional<CwPosetVerdict> verdict, HomologyOptions options, PhaseTiming read, PhaseTiming build) {
+        long start = System.nanoTime();
+        Homology homology = HomologyCalculator.compute(complex, options.coefficients());
+        if (options.reduced()) {
+            homology = homology.toReduced();
+        }
+        PhaseTiming compute = PhaseTiming.since(HOMOLOGY, start);
+        List<Integer> cells = new ArrayList<>();
+        for (int count : complex.cellCounts()) {
+            cells.add(count);
+        }
+        // without a matching every cell is critical
+        return new HomologyReport(source, format, complex.kind(), cells, options.matching(), cells, homology,
+                verdict, List.of(read, build, compute));
+    }
+}

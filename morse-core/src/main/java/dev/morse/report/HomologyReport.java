@@ -1,0 +1,76 @@
+package dev.morse.report;
+
+import dev.morse.complex.ComplexKind;
+import dev.morse.complex.CwPosetVerdict;
+import dev.morse.homology.Coefficients;
+import dev.morse.homology.Homology;
+import dev.morse.io.InputFormat;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * Everything one homology run produced, ready to be written as text or JSON. Immutable.
+ *
+ * @param input the input file name as the user gave it
+ * @param format the format the input was read in
+ * @param complex which chain complex was built
+ * @param cells cells per dimension of that complex, from dimension 0
+ * @param matching the name of the acyclic matching used ({@code none} for none)
+ * @param critical critical cells per dimension of that matching; equal to {@code cells} for {@code none}
+ * @param homology the homology, with its coefficients and whether it is reduced
+ * @param cwCheck the verdict of the CW poset check, when one was made
+ * @param timings the phases of the run in the order they ran
+ */
+public record HomologyReport(
+        String input,
+        InputFormat format,
+        ComplexKind complex,
+        List<Integer> cells,
+        String matching,
+        List<Integer> critical,
+        Homology homology,
+        Optional<CwPosetVerdict> cwCheck,
+        List<PhaseTiming> timings) {
+
+    /** Validates and copies. */
+    public HomologyReport {
+        Objects.requireNonNull(input, "input");
+        Objects.requireNonNull(format, "format");
+        Objects.requireNonNull(complex, "complex");
+        Objects.requireNonNull(matching, "matching");
+        Objects.requireNonNull(homology, "homology");
+        Objects.requireNonNull(cwCheck, "cwCheck");
+        cells = List.copyOf(cells);
+        critical = List.copyOf(critical);
+        timings = List.copyOf(timings);
+        if (critical.size() != cells.size()) {
+            throw new IllegalArgumentException("critical cells must be counted in every dimension of the complex");
+        }
+        for (int d = 0; d < cells.size(); d++) {
+            if (cells.get(d) < 0 || critical.get(d) < 0 || critical.get(d) > cells.get(d)) {
+                throw new IllegalArgumentException("bad cell or critical count in dimension " + d);
+            }
+        }
+    }
+
+    /** The coefficients of the homology. */
+    public Coefficients coefficients() {
+        return homology.coefficients();
+    }
+
+    /** Whether the homology is reduced. */
+    public boolean reduced() {
+        return homology.reduced();
+    }
+
+    /** Total number of cells of the complex. */
+    public long totalCells() {
+        return cells.stream().mapToLong(Integer::longValue).sum();
+    }
+
+    /** Total number of critical cells. */
+    public long totalCritical() {
+        return critical.stream().mapToLong(Integer::longValue).sum();
+    }
+}

@@ -1,0 +1,127 @@
+package dev.morse.report;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.util.DefaultIndenter;
+import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
+import com.fasterxml.jackson.core.util.Separators;
+import dev.morse.complex.CwPosetVerdict;
+import dev.morse.homology.HomologyGroup;
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.math.RoundingMode;
+import java.util.List;
+
+/**
+ * Writes a {@link HomologyReport} as one JSON object with the fields fixed by the design
+ * ({@code complex, cells, matching, critical, coefficients, homology}) and these of ours:
+ * {@code input}, {@code format} ({@code poset} or {@code simplicial}), {@code reduced},
+ * {@code cw_check} ({@code {"cw_poset": bool}}, with {@code "reason": text} when the check gave
+ * one, or {@code null} when no check was made) and {@code timings_ms} (phase name to milliseconds). Torsion factors are JSON integers of
+ * any size. Streams through Jackson's {@link JsonGenerator}; holds nothing.
+ */
+public final class JsonReportWriter {
+    private static final JsonFactory FACTORY = JsonFactory.builder().build();
+    private static final int TIMING_DECIMALS = 3;
+
+    private JsonReportWriter() {
+    }
+
+    /** The report as indented JSON text ending with a newline. */
+    public static String toJson(HomologyReport report) {
+        StringWriter out = new StringWriter();
+        try {
+            write(report, out);
+        } catch (IOException e) {
+            throw new UncheckedIOException("a string writer does not fail", e);
+        }
+        return out.toString();
+    }
+
+    /** Writes the report as indented JSON and a final newline to {@code out}; does not close it. */
+    public static void write(HomologyReport report, Writer out) throws IOException {
+        try (JsonGenerator json = FACTORY.createGenerator(out)) {
+            json.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
+            json.setPrettyPrinter(prettyPrinter());
+            json.writeStartObject();
+            json.writeStringField("input", report.input());
+            json.writeStringField("format", report.format().name().toLowerCase(java.util.Locale.ROOT));
+            json.writeStringField("complex", report.complex().reportName());
+            writeIntArray(json, "cells", report.cells());
+            json.writeStringField("matching", report.matching());
+            writeIntArray(json, "critical", report.critical());
+            json.writeStringField("coefficients", report.coefficients().toString());
+            json.writeBooleanField("reduced", report.reduced());
+            writeHomology(json, report.homology().groups());
+            writeCwCheck(json, report);
+            writeTimings(json, report.timings());
+            json.writeEndObject();
+        }
+        out.write('\n');
+        out.flush();
+    }
+
+    private static DefaultPrettyPrinter prettyPrinter() {
+        Separators separators = Separators.createDefaultInstance()
+                .withObjectFieldValueSpacing(Separators.Spacing.AFTER)
+                .withArrayEmptySeparator("")
+                .withObjectEmptySeparator("");
+        DefaultPrettyPrinter printer = new DefaultPrettyPrinter(separators);
+        // objects one field per line; arrays stay on one line, where cell counts read best
+        printer.indentObjectsWith(new DefaultIndenter("  ", "\n"));
+        printer.indentArraysWith(DefaultPrettyPrinter.FixedSpaceIndenter.instance);
+        return printer;
+    }
+
+    private static void writeIntArray(JsonGenerator json, String field, List<Integer> values) throws IOException {
+        json.writeArrayFieldStart(field);
+        for (int v : values) {
+            json.writeNumber(v);
+        }
+        json.writeEndArray();
+    }
+
+    private static void writeHomology(JsonGenerator json, List<HomologyGroup> groups) throws IOException {
+        json.writeArrayFieldStart("homology");
+        for (HomologyGroup group : groups) {
+            json.writeStartObject();
+            json.writeNumberField("dimension", group.dimension());
+            json.writeNumberField("betti", group.betti());
+            json.writeArrayFieldStart("torsion");
+            for (BigInteger factor : group.torsion()) {
+                json.writeNumber(factor);
+            }
+            json.writeEndArray();
+            json.writeEndObject();
+        }
+        json.writeEndArray();
+    }
+
+    private static void writeCwCheck(JsonGenerator json, HomologyReport report) throws IOException {
+        json.writeFieldName("cw_check");
+        if (report.cwCheck().isEmpty()) {
+            json.writeNull();
+            return;
+        }
+        CwPosetVerdict verdict = report.cwCheck().get();
+        json.writeStartObject();
+        json.writeBooleanField("cw_poset", verdict.isCwPoset());
+        if (!verdict.reason().isEmpty()) {
+            json.writeStringField("reason", verdict.reason());
+        }
+        json.writeEndObject();
+    }
+
+    private static void writeTimings(JsonGenerator json, List<PhaseTiming> timings) throws IOException {
+        json.writeObjectFieldStart("timings_ms");
+        for (PhaseTiming timing : timings) {
+            json.writeFieldName(timing.phase());
+            json.writeNumber(BigDecimal.valueOf(timing.milliseconds()).setScale(TIMING_DECIMALS, RoundingMode.HALF_UP));
+        }
+        json.writeEndObject();
+    }
+}

@@ -1,0 +1,122 @@
+package dev.morse.report;
+
+import dev.morse.homology.Coefficients;
+import dev.morse.homology.HomologyGroup;
+import dev.morse.io.InputFormat;
+import java.math.BigInteger;
+import java.util.List;
+import java.util.Locale;
+import java.util.StringJoiner;
+
+/**
+ * Writes a {@link HomologyReport} for people: a short two-column table saying which complex was
+ * built and, for a poset, why; its cells, the matching, one line per homology group such as
+ * {@code H_1 = Z^2 + Z/2}, and the time each phase took.
+ */
+public final class TextReportWriter {
+    private static final String ROW = "  %-10s%s\n";
+
+    private TextReportWriter() {
+    }
+
+    /** The report as lines of text, each ending with a newline. */
+    public static String toText(HomologyReport report) {
+        StringBuilder text = new StringBuilder();
+        text.append(String.format(Locale.ROOT, "%s (%s file)\n", report.input(),
+                report.format().name().toLowerCase(Locale.ROOT)));
+        row(text, "complex", complexLine(report));
+        String choice = choiceLine(report);
+        if (choice != null) {
+            row(text, "why", choice);
+        }
+        row(text, "cells", countsLine(report.cells()));
+        row(text, "matching", matchingLine(report));
+        row(text, "homology", (report.reduced() ? "reduced, " : "") + "coefficients " + ringName(report.coefficients()));
+        String prefix = report.reduced() ? "~H_" : "H_";
+        for (HomologyGroup group : report.homology().groups()) {
+            text.append(String.format(Locale.ROOT, "    %s%d = %s\n", prefix, group.dimension(),
+                    groupText(group, report.coefficients())));
+        }
+        if (report.homology().groups().isEmpty()) {
+            text.append("    (no cells, so no homology groups)").append("\n");
+        }
+        row(text, "time", timingLine(report.timings()));
+        return text.toString();
+    }
+
+    /** A homology group over the given coefficients, such as {@code Z^2 + Z/2}, {@code Q^3} or {@code (Z/2)^2}. */
+    public static String groupText(HomologyGroup group, Coefficients coefficients) {
+        String field = switch (coefficients.ring()) {
+            case INTEGERS -> "Z";
+            case RATIONALS -> "Q";
+            case PRIME_FIELD -> "Z/" + coefficients.prime();
+        };
+        StringJoiner parts = new StringJoiner(" + ");
+        if (group.betti() == 1) {
+            parts.add(field);
+        } else if (group.betti() > 1) {
+            parts.add((field.length() > 1 ? "(" + field + ")" : field) + "^" + group.betti());
+        }
+        for (BigInteger factor : group.torsion()) {
+            parts.add("Z/" + factor);
+        }
+        return parts.length() == 0 ? "0" : parts.toString();
+    }
+
+    private static void row(StringBuilder text, String label, String value) {
+        text.append(String.format(Locale.ROOT, ROW, label, value));
+    }
+
+    private static String complexLine(HomologyReport report) {
+        return switch (report.complex()) {
+            case CELLULAR -> "cellular, one cell per element of the poset";
+            case ORDER -> "order complex, one simplex per chain of the poset";
+            case SIMPLICIAL -> "simplicial, all faces of the listed faces";
+        };
+    }
+
+    /** Why this complex was built, when there was a choice. */
+    private static String choiceLine(HomologyReport report) {
+        if (report.format() != InputFormat.POSET) {
+            return null;
+        }
+        return report.cwCheck()
+                .map(v -> v.isCwPoset() ? "the poset is a CW poset" : "not a CW poset: " + v.reason())
+                .orElse("chosen without checking for a CW poset");
+    }
+
+    private static String countsLine(List<Integer> counts) {
+        long total = counts.stream().mapToLong(Integer::longValue).sum();
+        if (counts.isEmpty()) {
+            return "none";
+        }
+        StringJoiner byDimension = new StringJoiner(" + ");
+        counts.forEach(c -> byDimension.add(Integer.toString(c)));
+        return counts.size() == 1
+                ? total + " in dimension 0"
+                : total + " = " + byDimension + " in dimensions 0.." + (counts.size() - 1);
+    }
+
+    private static String matchingLine(HomologyReport report) {
+        if (report.critical().equals(report.cells())) {
+            return report.matching() + ", every cell is critical";
+        }
+        return report.matching() + ", critical cells " + countsLine(report.critical());
+    }
+
+    private static String ringName(Coefficients coefficients) {
+        return switch (coefficients.ring()) {
+            case INTEGERS -> "Z (integers)";
+            case RATIONALS -> "Q (rationals)";
+            case PRIME_FIELD -> "Z/" + coefficients.prime() + " (field of " + coefficients.prime() + " elements)";
+        };
+    }
+
+    private static String timingLine(List<PhaseTiming> timings) {
+        StringJoiner parts = new StringJoiner(", ");
+        for (PhaseTiming t : timings) {
+            parts.add(String.format(Locale.ROOT, "%s %.2f ms", t.phase(), t.milliseconds()));
+        }
+        return parts.length() == 0 ? "not measured" : parts.toString();
+    }
+}

@@ -2,6 +2,7 @@ package dev.morse.cli;
 
 import dev.morse.complex.ComplexChoice;
 import dev.morse.homology.Coefficients;
+import dev.morse.matching.MatchingHeuristics;
 import dev.morse.pipeline.HomologyOptions;
 import dev.morse.pipeline.HomologyPipeline;
 import dev.morse.report.HomologyReport;
@@ -49,11 +50,23 @@ final class HomologyCommand implements Callable<Integer> {
     @Option(names = "--reduced", description = "Report reduced homology.")
     private boolean reduced;
 
-    @Option(names = "--matching", paramLabel = "NAME", defaultValue = HomologyPipeline.NO_MATCHING,
+    @Option(names = "--matching", paramLabel = "NAME", defaultValue = MatchingHeuristics.DEFAULT,
             converter = OptionConverters.MatchingConverter.class, completionCandidates = OptionConverters.MatchingNames.class,
-            description = "Acyclic matching used to shrink the complex; available: ${COMPLETION-CANDIDATES}."
-                    + " 'none' computes on every cell.")
+            description = "Acyclic matching used to shrink the complex; available: ${COMPLETION-CANDIDATES}"
+                    + " (default ${DEFAULT-VALUE}). 'none' computes on every cell.")
     private String matching;
+
+    @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
+            description = "Seed of the random matching's choices, and of the first trial (default ${DEFAULT-VALUE}).")
+    private long seed;
+
+    @Option(names = "--trials", paramLabel = "N", defaultValue = "1",
+            description = "Run the matching N times with seeds from --seed on and report how often each vector of"
+                    + " critical cells occurred.")
+    private int trials;
+
+    @Option(names = "--no-verify", description = "Trust the matching without checking that it is acyclic.")
+    private boolean noVerify;
 
     // read by Failures through the parse result, which is where it matters
     @Option(names = "--debug", description = "Show stack traces of failures.")
@@ -64,7 +77,8 @@ final class HomologyCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        HomologyReport report = HomologyPipeline.run(file, new HomologyOptions(complex, coefficients, reduced, matching));
+        HomologyReport report = HomologyPipeline.run(file,
+                new HomologyOptions(complex, coefficients, reduced, matching, seed, trials, !noVerify));
         String text = json ? JsonReportWriter.toJson(report) : TextReportWriter.toText(report);
         PrintWriter out = spec.commandLine().getOut();
         out.print(text);

@@ -113,8 +113,11 @@ class HomologyCommandTest {
         Map<String, Object> json = json(square);
         assertEquals("cellular", json.get("complex"));
         assertEquals(ints(4, 4, 1), json.get("cells"));
-        assertEquals("none", json.get("matching"));
-        assertEquals(ints(4, 4, 1), json.get("critical"));
+        assertEquals("coreduction", json.get("matching"));
+        // a disk is collapsible: coreduction leaves one critical vertex, the Morse lower bound (Forman 1998)
+        assertEquals(ints(1, 0, 0), json.get("critical"));
+        assertEquals(BigInteger.ONE, json.get("morse_lower_bound"));
+        assertEquals(BigInteger.ZERO, json.get("excess"));
         assertEquals("Z", json.get("coefficients"));
         assertEquals(ints(1, 0, 0), betti(json));
         assertEquals(List.of(), torsion(json, 1));
@@ -193,6 +196,26 @@ class HomologyCommandTest {
     }
 
     @Test
+    void everyHeuristicGivesTheSameHomologyOfRp2() {
+        // RP^2: H = Z, Z/2, 0 (Hatcher 2002, Example 2.42); the lower bound is 1 + 1 + 1 = 3
+        for (String name : List.of("coreduction", "collapse", "lexicographic", "random", "none")) {
+            Map<String, Object> json = json(rp2, "--matching", name);
+            assertEquals(ints(1, 0, 0), betti(json), name);
+            assertEquals(List.of(BigInteger.TWO), torsion(json, 1), name);
+            assertEquals(BigInteger.valueOf(3), json.get("morse_lower_bound"), name);
+        }
+    }
+
+    @Test
+    void trialsOfTheRandomMatchingAreTallied() {
+        Map<String, Object> json = json(rp2, "--matching", "random", "--trials", "20", "--seed", "7");
+        @SuppressWarnings("unchecked")
+        List<Map<String, Object>> trials = (List<Map<String, Object>>) json.get("trials");
+        int total = trials.stream().mapToInt(t -> ((BigInteger) t.get("count")).intValue()).sum();
+        assertEquals(20, total);
+    }
+
+    @Test
     void textReportShowsTheGroups() {
         CliRun run = CliRun.morse("homology", rp2);
         assertEquals(0, run.code(), run.err());
@@ -202,11 +225,11 @@ class HomologyCommandTest {
 
     @Test
     void unavailableMatchingIsAnOptionErrorNamingTheAvailableOnes() {
-        // "coreduction" is not offered yet; the message must list what is
-        CliRun run = CliRun.morse("homology", square, "--matching", "coreduction");
+        CliRun run = CliRun.morse("homology", square, "--matching", "steepest");
         assertEquals(2, run.code());
         assertEquals("", run.out());
-        assertTrue(run.errLines().get(0).contains("unknown matching 'coreduction'; available: none"), run.err());
+        assertTrue(run.errLines().get(0).contains(
+                "unknown matching 'steepest'; available: coreduction, collapse, lexicographic, random, none"), run.err());
         assertTrue(run.errLines().size() <= 2, run.err());
     }
 

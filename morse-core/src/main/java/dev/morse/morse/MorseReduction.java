@@ -80,15 +80,15 @@ public final class MorseReduction {
 
     /** Runs the reduction on {@code complex}. */
     public static Outcome run(ChainComplex complex, Request request) {
-        Map<String, Long> times = new LinkedHashMap<>();
+        Map<String, Double> times = new LinkedHashMap<>();
         long t0 = System.nanoTime();
         Matching matching = request.heuristic().match(complex, request.options());
         long t1 = System.nanoTime();
-        times.put("match", (t1 - t0) / 1_000_000);
+        times.put("match", millis(t0, t1));
         MatchingVerdict verdict = null;
         if (request.verify()) {
             verdict = MatchingVerifier.verify(complex, matching);
-            times.put("verify", (System.nanoTime() - t1) / 1_000_000);
+            times.put("verify", millis(t1, System.nanoTime()));
             if (!verdict.valid()) {
                 throw new IllegalStateException("heuristic " + request.heuristic().name()
                         + " produced an invalid matching: " + verdict.defect());
@@ -98,21 +98,25 @@ public final class MorseReduction {
         if (request.heuristic() instanceof NoMatchingHeuristic) {
             long t2 = System.nanoTime();
             Homology homology = HomologyCalculator.compute(complex, request.coefficients());
-            times.put("homology", (System.nanoTime() - t2) / 1_000_000);
+            times.put("homology", millis(t2, System.nanoTime()));
             return new Outcome(request.heuristic().name(), complex.cellCounts(), critical, verdict, List.of(), homology,
                     new PhaseTimes(times));
         }
         long t2 = System.nanoTime();
         MorseComplex morse = GradientSweep.build(complex, matching);
         long t3 = System.nanoTime();
-        times.put("sweep", (t3 - t2) / 1_000_000);
+        times.put("sweep", millis(t2, t3));
         AlgebraicReduction.Result reduced = AlgebraicReduction.reduce(morse);
         long t4 = System.nanoTime();
-        times.put("reduce", (t4 - t3) / 1_000_000);
+        times.put("reduce", millis(t3, t4));
         Homology homology = MatrixHomology.compute(reduced.reduced(), request.coefficients());
-        times.put("homology", (System.nanoTime() - t4) / 1_000_000);
+        times.put("homology", millis(t4, System.nanoTime()));
         return new Outcome(request.heuristic().name(), complex.cellCounts(), critical, verdict, reduced.rounds(), homology,
                 new PhaseTimes(times));
+    }
+
+    private static double millis(long startNanos, long endNanos) {
+        return (endNanos - startNanos) / 1e6;
     }
 
     /** Σ_k (β_k + t_k + t_(k−1)) for the given homology. */

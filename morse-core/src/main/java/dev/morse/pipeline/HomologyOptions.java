@@ -2,6 +2,7 @@ package dev.morse.pipeline;
 
 import dev.morse.complex.ComplexChoice;
 import dev.morse.homology.Coefficients;
+import dev.morse.matching.MatchingHeuristics;
 import java.util.Objects;
 
 /**
@@ -11,8 +12,12 @@ import java.util.Objects;
  * @param coefficients the coefficient ring
  * @param reduced whether to report reduced homology
  * @param matching the name of the acyclic matching, one of {@link HomologyPipeline#matchingNames()}
+ * @param seed the seed of the matching's random choices (and of the first trial)
+ * @param trials how many seeded runs of the matching to tally; 1 runs it once
+ * @param verify whether to verify the matching before trusting it
  */
-public record HomologyOptions(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching) {
+public record HomologyOptions(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching,
+        long seed, int trials, boolean verify) {
     /**
      * Validates.
      *
@@ -22,15 +27,23 @@ public record HomologyOptions(ComplexChoice complex, Coefficients coefficients, 
         Objects.requireNonNull(complex, "complex");
         Objects.requireNonNull(coefficients, "coefficients");
         matching = HomologyPipeline.requireKnownMatching(matching);
+        if (trials < 1) {
+            throw new IllegalArgumentException("trials must be at least 1");
+        }
     }
 
-    /** The defaults: automatic choice of complex, integer coefficients, unreduced, no matching. */
+    /** Options with seed 1, one trial and verification on. */
+    public HomologyOptions(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching) {
+        this(complex, coefficients, reduced, matching, 1L, 1, true);
+    }
+
+    /** The defaults: automatic choice of complex, integer coefficients, unreduced, the default matching. */
     public static HomologyOptions defaults() {
-        return new HomologyOptions(ComplexChoice.AUTO, Coefficients.INTEGERS, false, HomologyPipeline.NO_MATCHING);
+        return new HomologyOptions(ComplexChoice.AUTO, Coefficients.INTEGERS, false, MatchingHeuristics.DEFAULT);
     }
 
     /** These options with another choice of complex. */
     public HomologyOptions withComplex(ComplexChoice choice) {
-        return new HomologyOptions(choice, coefficients, reduced, matching);
+        return new HomologyOptions(choice, coefficients, reduced, matching, seed, trials, verify);
     }
 }

@@ -9,7 +9,6 @@ import dev.morse.complex.Facets;
 import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.homology.Homology;
-import dev.morse.homology.HomologyCalculator;
 import dev.morse.io.InputException;
 import dev.morse.io.InputFormat;
 import dev.morse.io.PosetReader;
@@ -23,30 +22,37 @@ import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import dev.morse.matching.MatchingHeuristic;
+import dev.morse.matching.MatchingHeuristics;
+import dev.morse.matching.MatchingOptions;
+import dev.morse.matching.MatchingTrials;
+import dev.morse.matching.TrialCount;
+import dev.morse.morse.MorseReduction;
 import java.util.List;
 import java.util.Optional;
 
 /**
  * Runs homology on one input: detects the format from the header line, reads it, builds the chain
  * complex (for a poset: the cellular complex when it is a CW poset and the choice allows, else the
- * order complex), computes homology and returns a {@link HomologyReport} with the time of each
- * phase ({@code read}, {@code complex}, {@code homology}). Stateless.
+ * order complex), reduces it by the chosen acyclic matching and computes homology, returning a
+ * {@link HomologyReport} with the time of each phase ({@code read}, {@code complex}, then
+ * {@code match}, {@code verify}, {@code sweep}, {@code reduce}, {@code homology} as they ran).
+ * Stateless.
  */
 public final class HomologyPipeline {
     /** The matching name that means no Morse reduction: every cell is critical. */
     public static final String NO_MATCHING = "none";
 
-    private static final List<String> MATCHINGS = List.of(NO_MATCHING);
     private static final String READ = "read";
     private static final String COMPLEX = "complex";
-    private static final String HOMOLOGY = "homology";
+    private static final String TRIALS = "trials";
 
     private HomologyPipeline() {
     }
 
     /** The names accepted as a matching, in the order to show them. */
     public static List<String> matchingNames() {
-        return MATCHINGS;
+        return MatchingHeuristics.names();
     }
 
     /**
@@ -55,9 +61,9 @@ public final class HomologyPipeline {
      * @throws IllegalArgumentException naming the available matchings otherwise
      */
     public static String requireKnownMatching(String name) {
-        if (name == null || !MATCHINGS.contains(name)) {
+        if (name == null || MatchingHeuristics.byName(name).isEmpty()) {
             throw new IllegalArgumentException("unknown matching '" + name + "'; available: "
-                    + String.join(", ", MATCHINGS));
+                    + String.join(", ", matchingNames()));
         }
         return name;
     }
@@ -164,18 +170,27 @@ public final class HomologyPipeline {
 
     private static HomologyReport finish(String source, InputFormat format, ChainComplex complex,
             Optional<CwPosetVerdict> verdict, HomologyOptions options, PhaseTiming read, PhaseTiming build) {
-        long start = System.nanoTime();
-        Homology homology = HomologyCalculator.compute(complex, options.coefficients());
-        if (options.reduced()) {
-            homology = homology.toReduced();
+        MatchingHeuristic heuristic = MatchingHeuristics.byName(options.matching()).orElseThrow();
+        MorseReduction.Outcome outcome = MorseReduction.run(complex, new MorseReduction.Request(heuristic,
+                new MatchingOptions(options.seed()), options.coefficients(), options.verify()));
+        List<PhaseTiming> timings = new ArrayList<>(List.of(read, build));
+        outcome.times().millis().forEach((phase, ms) -> timings.add(new PhaseTiming(phase, ms)));
+        List<TrialCount> trials = List.of();
+        if (options.trials() > 1) {
+            long start = System.nanoTime();
+            trials = MatchingTrials.run(complex, heuristic, options.seed(), options.trials());
+            timings.add(PhaseTiming.since(TRIALS, start));
         }
-        PhaseTiming compute = PhaseTiming.since(HOMOLOGY, start);
-        List<Integer> cells = new ArrayList<>();
-        for (int count : complex.cellCounts()) {
-            cells.add(count);
+        Homology homology = options.reduced() ? outcome.homology().toReduced() : outcome.homology();
+        return new HomologyReport(source, format, complex.kind(), boxed(outcome.cells()), heuristic.name(),
+                boxed(outcome.critical()), homology, verdict, timings, outcome.rounds(), outcome.lowerBound(), trials);
+    }
+
+    private static List<Integer> boxed(int[] counts) {
+        List<Integer> list = new ArrayList<>(counts.length);
+        for (int c : counts) {
+            list.add(c);
         }
-        // without a matching every cell is critical
-        return new HomologyReport(source, format, complex.kind(), cells, options.matching(), cells, homology,
-                verdict, List.of(read, build, compute));
+        return list;
     }
 }

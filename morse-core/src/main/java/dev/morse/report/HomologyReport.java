@@ -5,6 +5,9 @@ import dev.morse.complex.CwPosetVerdict;
 import dev.morse.homology.Coefficients;
 import dev.morse.homology.Homology;
 import dev.morse.io.InputFormat;
+import dev.morse.matching.TrialCount;
+import dev.morse.morse.MorseReduction;
+import dev.morse.morse.ReductionRound;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -21,6 +24,12 @@ import java.util.Optional;
  * @param homology the homology, with its coefficients and whether it is reduced
  * @param cwCheck the verdict of the CW poset check, when one was made
  * @param timings the phases of the run in the order they ran
+ * @param rounds cells per dimension left after each round of algebraic reduction of the Morse
+ *     complex (empty without a matching)
+ * @param morseLowerBound the Morse lower bound Σ_k (β_k + t_k + t_(k−1)) on critical cells, from the
+ *     unreduced homology (Forman 1998)
+ * @param trials the spread of critical-cell vectors over repeated seeded runs of the matching (empty
+ *     when only one run was asked for)
  */
 public record HomologyReport(
         String input,
@@ -31,7 +40,10 @@ public record HomologyReport(
         List<Integer> critical,
         Homology homology,
         Optional<CwPosetVerdict> cwCheck,
-        List<PhaseTiming> timings) {
+        List<PhaseTiming> timings,
+        List<ReductionRound> rounds,
+        long morseLowerBound,
+        List<TrialCount> trials) {
 
     /** Validates and copies. */
     public HomologyReport {
@@ -44,6 +56,11 @@ public record HomologyReport(
         cells = List.copyOf(cells);
         critical = List.copyOf(critical);
         timings = List.copyOf(timings);
+        rounds = List.copyOf(rounds);
+        trials = List.copyOf(trials);
+        if (morseLowerBound < 0) {
+            throw new IllegalArgumentException("negative lower bound");
+        }
         if (critical.size() != cells.size()) {
             throw new IllegalArgumentException("critical cells must be counted in every dimension of the complex");
         }
@@ -52,6 +69,21 @@ public record HomologyReport(
                 throw new IllegalArgumentException("bad cell or critical count in dimension " + d);
             }
         }
+    }
+
+    /**
+     * A report of a run without algebraic rounds or trials, the lower bound taken from
+     * {@code homology}, which must then be unreduced.
+     */
+    public HomologyReport(String input, InputFormat format, ComplexKind complex, List<Integer> cells, String matching,
+            List<Integer> critical, Homology homology, Optional<CwPosetVerdict> cwCheck, List<PhaseTiming> timings) {
+        this(input, format, complex, cells, matching, critical, homology, cwCheck, timings, List.of(),
+                MorseReduction.lowerBound(homology), List.of());
+    }
+
+    /** Critical cells beyond the Morse lower bound. */
+    public long excess() {
+        return totalCritical() - morseLowerBound;
     }
 
     /** The coefficients of the homology. */

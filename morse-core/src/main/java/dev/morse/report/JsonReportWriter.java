@@ -14,6 +14,8 @@ import java.io.Writer;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.math.RoundingMode;
+import dev.morse.matching.TrialCount;
+import dev.morse.morse.ReductionRound;
 import java.util.List;
 
 /**
@@ -21,7 +23,10 @@ import java.util.List;
  * ({@code complex, cells, matching, critical, coefficients, homology}) and these of ours:
  * {@code input}, {@code format} ({@code poset} or {@code simplicial}), {@code reduced},
  * {@code cw_check} ({@code {"cw_poset": bool}}, with {@code "reason": text} when the check gave
- * one, or {@code null} when no check was made) and {@code timings_ms} (phase name to milliseconds). Torsion factors are JSON integers of
+ * one, or {@code null} when no check was made), {@code morse_lower_bound} and {@code excess} (critical
+ * cells beyond it), {@code rounds} (cells left after each algebraic reduction round), {@code trials}
+ * (critical vectors and how often each occurred, when several seeded runs were asked for) and
+ * {@code timings_ms} (phase name to milliseconds). Torsion factors are JSON integers of
  * any size. Streams through Jackson's {@link JsonGenerator}; holds nothing.
  */
 public final class JsonReportWriter {
@@ -57,6 +62,12 @@ public final class JsonReportWriter {
             json.writeStringField("coefficients", report.coefficients().toString());
             json.writeBooleanField("reduced", report.reduced());
             writeHomology(json, report.homology().groups());
+            json.writeNumberField("morse_lower_bound", report.morseLowerBound());
+            json.writeNumberField("excess", report.excess());
+            writeRounds(json, report.rounds());
+            if (!report.trials().isEmpty()) {
+                writeTrials(json, report.trials());
+            }
             writeCwCheck(json, report);
             writeTimings(json, report.timings());
             json.writeEndObject();
@@ -96,6 +107,33 @@ public final class JsonReportWriter {
                 json.writeNumber(factor);
             }
             json.writeEndArray();
+            json.writeEndObject();
+        }
+        json.writeEndArray();
+    }
+
+    private static void writeRounds(JsonGenerator json, List<ReductionRound> rounds) throws IOException {
+        json.writeArrayFieldStart("rounds");
+        for (ReductionRound round : rounds) {
+            json.writeStartObject();
+            json.writeNumberField("round", round.round());
+            json.writeNumberField("pairs_removed", round.pairsRemoved());
+            json.writeArrayFieldStart("cells");
+            for (int c : round.cellCounts()) {
+                json.writeNumber(c);
+            }
+            json.writeEndArray();
+            json.writeEndObject();
+        }
+        json.writeEndArray();
+    }
+
+    private static void writeTrials(JsonGenerator json, List<TrialCount> trials) throws IOException {
+        json.writeArrayFieldStart("trials");
+        for (TrialCount trial : trials) {
+            json.writeStartObject();
+            writeIntArray(json, "critical", trial.critical());
+            json.writeNumberField("count", trial.count());
             json.writeEndObject();
         }
         json.writeEndArray();

@@ -4,13 +4,17 @@ import dev.morse.homology.Coefficients;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.io.InputFormat;
 import java.math.BigInteger;
+import dev.morse.matching.TrialCount;
+import dev.morse.morse.ReductionRound;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.StringJoiner;
 
 /**
  * Writes a {@link HomologyReport} for people: a short two-column table saying which complex was
- * built and, for a poset, why; its cells, the matching, one line per homology group such as
+ * built and, for a poset, why; its cells, the matching and its critical cells against the Morse lower
+ * bound, the cells left after each algebraic round, one line per homology group such as
  * {@code H_1 = Z^2 + Z/2}, and the time each phase took.
  */
 public final class TextReportWriter {
@@ -31,6 +35,14 @@ public final class TextReportWriter {
         }
         row(text, "cells", countsLine(report.cells()));
         row(text, "matching", matchingLine(report));
+        row(text, "bound", "Morse lower bound " + report.morseLowerBound() + ", excess " + report.excess());
+        for (ReductionRound round : report.rounds()) {
+            row(text, "round " + round.round(), round.pairsRemoved() + " pairs removed, left "
+                    + countsLine(Arrays.stream(round.cellCounts()).boxed().toList()));
+        }
+        for (TrialCount trial : report.trials()) {
+            row(text, "trials", trial.count() + " x critical " + countsLine(trial.critical()));
+        }
         row(text, "homology", (report.reduced() ? "reduced, " : "") + "coefficients " + ringName(report.coefficients()));
         String prefix = report.reduced() ? "~H_" : "H_";
         for (HomologyGroup group : report.homology().groups()) {

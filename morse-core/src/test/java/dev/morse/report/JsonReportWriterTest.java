@@ -62,7 +62,8 @@ class JsonReportWriterTest {
     void extraFieldsDescribeTheRun() {
         Map<String, Object> json = json(kleinBottle());
         assertEquals(List.of("input", "format", "complex", "cells", "matching", "critical", "coefficients",
-                "reduced", "homology", "cw_check", "timings_ms"), List.copyOf(json.keySet()));
+                "reduced", "homology", "morse_lower_bound", "excess", "rounds", "cw_check", "timings_ms"),
+                List.copyOf(json.keySet()));
         assertEquals("klein.simplicial", json.get("input"));
         assertEquals("simplicial", json.get("format"));
         assertEquals(Boolean.FALSE, json.get("reduced"));

@@ -14,7 +14,7 @@ import java.nio.file.Path;
 /**
  * Prints one table row per grid side: elements, covers, file size, time to read and build the
  * Hasse diagram, and the peak heap used by the JVM during the run. Run each side in its own JVM
- * (see {@code benchmarks/parse-table.sh}) so that peaks do not mix.
+ * (see {@code benchmarks/morse-table.sh}) so that peaks do not mix.
  */
 public final class ParseTable {
     private ParseTable() {

@@ -18,7 +18,9 @@ import java.util.Map;
 /**
  * Homology of a chain complex by discrete Morse reduction: match, verify, sweep the gradient into the
  * Morse complex, reduce it algebraically, and finish with exact homology of what is left. With the
- * heuristic {@code none} the Smith normal form runs on every cell (the baseline).
+ * heuristic {@code none} the Smith normal form runs on every cell (the baseline). Should a Morse
+ * coefficient not fit in a long, the answer is computed on every cell instead, where the Smith
+ * normal form carries on in BigInteger arithmetic: slower, never wrong.
  */
 public final class MorseReduction {
     private MorseReduction() {
@@ -103,7 +105,18 @@ public final class MorseReduction {
                     new PhaseTimes(times));
         }
         long t2 = System.nanoTime();
-        MorseComplex morse = GradientSweep.build(complex, matching);
+        MorseComplex morse;
+        try {
+            morse = GradientSweep.build(complex, matching);
+        } catch (ArithmeticException overflow) {
+            // a Morse coefficient left the range of long: answer exactly on every cell instead
+            times.put("sweep", millis(t2, System.nanoTime()));
+            long t3 = System.nanoTime();
+            Homology homology = HomologyCalculator.compute(complex, request.coefficients());
+            times.put("homology on every cell after overflow", millis(t3, System.nanoTime()));
+            return new Outcome(request.heuristic().name(), complex.cellCounts(), critical, verdict, List.of(), homology,
+                    new PhaseTimes(times));
+        }
         long t3 = System.nanoTime();
         times.put("sweep", millis(t2, t3));
         AlgebraicReduction.Result reduced = AlgebraicReduction.reduce(morse);

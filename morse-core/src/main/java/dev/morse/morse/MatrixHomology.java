@@ -12,11 +12,12 @@ import java.util.ArrayList;
 import java.util.List;
 
 /** Homology of a {@link MorseComplex} from the Smith forms or ranks of its boundary matrices. */
-final class MatrixHomology {
+public final class MatrixHomology {
     private MatrixHomology() {
     }
 
-    static Homology compute(MorseComplex complex, Coefficients coefficients) {
+    /** The unreduced homology of {@code complex} over {@code coefficients}. */
+    public static Homology compute(MorseComplex complex, Coefficients coefficients) {
         int top = complex.dimension();
         int[] rank = new int[top + 2];
         List<List<BigInteger>> torsion = new ArrayList<>();

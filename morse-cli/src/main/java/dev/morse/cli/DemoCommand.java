@@ -118,7 +118,7 @@ final class DemoCommand implements Callable<Integer> {
 
     private static String counts(HomologyReport report) {
         StringJoiner parts = new StringJoiner(" + ");
-        report.cells().forEach(c -> parts.add(Integer.toString(c)));
+        report.cells().forEach(c -> parts.add(Long.toString(c)));
         return parts.toString();
     }
 

@@ -2,6 +2,7 @@ package dev.morse.cli;
 
 import dev.morse.complex.ComplexChoice;
 import dev.morse.homology.Coefficients;
+import dev.morse.implicit.ElementOrder;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.pipeline.HomologyOptions;
 import dev.morse.pipeline.HomologyPipeline;
@@ -36,11 +37,25 @@ final class HomologyCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print one JSON object instead of a table.")
     private boolean json;
 
-    @Option(names = "--complex", paramLabel = "auto|order|cellular", defaultValue = "auto",
+    @Option(names = "--complex", paramLabel = "auto|order|cellular|implicit", defaultValue = "auto",
             converter = OptionConverters.ComplexConverter.class, completionCandidates = OptionConverters.ComplexNames.class,
-            description = "Complex to build from a poset: cellular when it is a CW poset (auto, the default),"
-                    + " always the order complex, or insist on the cellular complex.")
+            description = "Complex to build from a poset: cellular when it is a CW poset, else the order complex,"
+                    + " stored or with chains generated on demand when they are too many (auto, the default);"
+                    + " always the stored order complex; insist on the cellular complex; or always generate the"
+                    + " chains of the order complex on demand.")
     private ComplexChoice complex;
+
+    @Option(names = "--element-order", paramLabel = "NAME", defaultValue = "down-sets",
+            converter = OptionConverters.ElementOrderConverter.class,
+            completionCandidates = OptionConverters.ElementOrderNames.class,
+            description = "Order of covers that fixes the matching of the order complex generated on demand;"
+                    + " available: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}).")
+    private ElementOrder elementOrder;
+
+    @Option(names = "--max-stored-chains", paramLabel = "N", defaultValue = "2000000",
+            description = "With --complex auto, a poset with more chains than this gets its order complex generated"
+                    + " on demand instead of stored (default ${DEFAULT-VALUE}).")
+    private long maxStoredChains;
 
     @Option(names = "--coefficients", paramLabel = "Z|Q|P", defaultValue = "Z",
             converter = OptionConverters.CoefficientsConverter.class,
@@ -78,7 +93,8 @@ final class HomologyCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         HomologyReport report = HomologyPipeline.run(file,
-                new HomologyOptions(complex, coefficients, reduced, matching, seed, trials, !noVerify));
+                new HomologyOptions(complex, coefficients, reduced, matching, seed, trials, !noVerify, elementOrder,
+                        maxStoredChains));
         String text = json ? JsonReportWriter.toJson(report) : TextReportWriter.toText(report);
         PrintWriter out = spec.commandLine().getOut();
         out.print(text);

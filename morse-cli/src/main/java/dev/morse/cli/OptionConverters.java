@@ -2,6 +2,7 @@ package dev.morse.cli;
 
 import dev.morse.complex.ComplexChoice;
 import dev.morse.homology.Coefficients;
+import dev.morse.implicit.ElementOrder;
 import dev.morse.pipeline.HomologyPipeline;
 import java.util.Iterator;
 import java.util.List;
@@ -14,7 +15,7 @@ final class OptionConverters {
     private OptionConverters() {
     }
 
-    /** {@code auto}, {@code order} or {@code cellular}. */
+    /** {@code auto}, {@code order}, {@code cellular} or {@code implicit}. */
     static final class ComplexConverter implements ITypeConverter<ComplexChoice> {
         @Override
         public ComplexChoice convert(String value) {
@@ -31,6 +32,26 @@ final class OptionConverters {
         @Override
         public Iterator<String> iterator() {
             return Stream.of(ComplexChoice.values()).map(ComplexChoice::optionName).iterator();
+        }
+    }
+
+    /** An element order of the implicit order complex. */
+    static final class ElementOrderConverter implements ITypeConverter<ElementOrder> {
+        @Override
+        public ElementOrder convert(String value) {
+            try {
+                return ElementOrder.parse(value);
+            } catch (IllegalArgumentException e) {
+                throw new TypeConversionException(e.getMessage());
+            }
+        }
+    }
+
+    /** The names shown for {@code --element-order}. */
+    static final class ElementOrderNames implements Iterable<String> {
+        @Override
+        public Iterator<String> iterator() {
+            return Stream.of(ElementOrder.values()).map(ElementOrder::optionName).iterator();
         }
     }
 

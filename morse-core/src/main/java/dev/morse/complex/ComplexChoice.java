@@ -4,12 +4,17 @@ import java.util.Locale;
 
 /** Which chain complex to build on a poset. */
 public enum ComplexChoice {
-    /** The cellular complex when the poset is a CW poset, else the order complex. */
+    /**
+     * The cellular complex when the poset is a CW poset, else the order complex: stored when its
+     * chains are few enough, else generated on demand.
+     */
     AUTO,
-    /** Always the order complex. */
+    /** Always the order complex, every chain stored. */
     ORDER,
     /** Always the cellular complex; fails on a poset that is not a CW poset. */
-    CELLULAR;
+    CELLULAR,
+    /** Always the order complex with chains generated on demand and never stored (dev.morse.implicit). */
+    IMPLICIT;
 
     /** The lower-case name users type. */
     public String optionName() {
@@ -17,7 +22,7 @@ public enum ComplexChoice {
     }
 
     /**
-     * Parses {@code auto}, {@code order} or {@code cellular}.
+     * Parses {@code auto}, {@code order}, {@code cellular} or {@code implicit}.
      *
      * @throws IllegalArgumentException with a message fit for users
      */
@@ -27,6 +32,6 @@ public enum ComplexChoice {
                 return choice;
             }
         }
-        throw new IllegalArgumentException("the complex must be auto, order or cellular, not '" + text + "'");
+        throw new IllegalArgumentException("the complex must be auto, order, cellular or implicit, not '" + text + "'");
     }
 }

@@ -17,11 +17,14 @@ public final class ComplexSelector {
      * @throws IllegalArgumentException for {@link ComplexChoice#CELLULAR} on a poset that is not a
      *     CW poset, with the verdict's reason
      * @throws IllegalStateException when the order complex is asked for and has too many cells
+     * @throws IllegalArgumentException for {@link ComplexChoice#IMPLICIT}, which stores no complex
      */
     public static ChainComplex select(Poset poset, ComplexChoice choice) {
         return switch (choice) {
             case ORDER -> OrderComplex.of(poset);
             case CELLULAR -> CellularComplex.of(poset);
+            case IMPLICIT -> throw new IllegalArgumentException(
+                    "the implicit order complex stores no cells; dev.morse.implicit.ImplicitHomology computes its homology");
             case AUTO -> {
                 CwStructure structure = CwPosetCheck.analyse(poset);
                 yield structure.verdict().isCwPoset()

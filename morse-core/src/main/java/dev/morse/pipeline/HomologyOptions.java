@@ -2,6 +2,7 @@ package dev.morse.pipeline;
 
 import dev.morse.complex.ComplexChoice;
 import dev.morse.homology.Coefficients;
+import dev.morse.implicit.ElementOrder;
 import dev.morse.matching.MatchingHeuristics;
 import java.util.Objects;
 
@@ -15,9 +16,20 @@ import java.util.Objects;
  * @param seed the seed of the matching's random choices (and of the first trial)
  * @param trials how many seeded runs of the matching to tally; 1 runs it once
  * @param verify whether to verify the matching before trusting it
+ * @param elementOrder the order of covers that fixes the matching of the implicit order complex
+ * @param storedChainLimit the most chains {@link ComplexChoice#AUTO} stores; a poset with more gets the
+ *     implicit order complex
  */
 public record HomologyOptions(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching,
-        long seed, int trials, boolean verify) {
+        long seed, int trials, boolean verify, ElementOrder elementOrder, long storedChainLimit) {
+    /**
+     * Posets with more chains than this get the implicit order complex under {@link ComplexChoice#AUTO}.
+     * The stored order complex takes some 100 bytes per chain with its matching and verification, so
+     * this keeps it within a few hundred MiB and a few seconds; beyond it the implicit engine is
+     * leaner, and for the posets it matches well, also faster.
+     */
+    public static final long DEFAULT_STORED_CHAIN_LIMIT = 2_000_000;
+
     /**
      * Validates.
      *
@@ -30,6 +42,17 @@ public record HomologyOptions(ComplexChoice complex, Coefficients coefficients, 
         if (trials < 1) {
             throw new IllegalArgumentException("trials must be at least 1");
         }
+        Objects.requireNonNull(elementOrder, "elementOrder");
+        if (storedChainLimit < 0 || storedChainLimit > 1L << 60) {
+            throw new IllegalArgumentException("the stored chain limit must lie in 0..2^60");
+        }
+    }
+
+    /** Options with the default element order and stored chain limit. */
+    public HomologyOptions(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching,
+            long seed, int trials, boolean verify) {
+        this(complex, coefficients, reduced, matching, seed, trials, verify, ElementOrder.DOWN_SETS,
+                DEFAULT_STORED_CHAIN_LIMIT);
     }
 
     /** Options with seed 1, one trial and verification on. */
@@ -44,6 +67,12 @@ public record HomologyOptions(ComplexChoice complex, Coefficients coefficients, 
 
     /** These options with another choice of complex. */
     public HomologyOptions withComplex(ComplexChoice choice) {
-        return new HomologyOptions(choice, coefficients, reduced, matching, seed, trials, verify);
+        return new HomologyOptions(choice, coefficients, reduced, matching, seed, trials, verify, elementOrder,
+                storedChainLimit);
+    }
+
+    /** These options with another element order and stored chain limit for the implicit order complex. */
+    public HomologyOptions withImplicit(ElementOrder order, long limit) {
+        return new HomologyOptions(complex, coefficients, reduced, matching, seed, trials, verify, order, limit);
     }
 }

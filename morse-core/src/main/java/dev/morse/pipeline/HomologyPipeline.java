@@ -14,6 +14,7 @@ import dev.morse.io.InputFormat;
 import dev.morse.io.PosetReader;
 import dev.morse.io.SimplicialReader;
 import dev.morse.poset.Poset;
+import dev.morse.report.ComplexEngine;
 import dev.morse.report.HomologyReport;
 import dev.morse.report.PhaseTiming;
 import java.io.IOException;
@@ -22,6 +23,7 @@ import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import dev.morse.matching.MatchingHeuristic;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
@@ -34,7 +36,8 @@ import java.util.Optional;
 /**
  * Runs homology on one input: detects the format from the header line, reads it, builds the chain
  * complex (for a poset: the cellular complex when it is a CW poset and the choice allows, else the
- * order complex), reduces it by the chosen acyclic matching and computes homology, returning a
+ * order complex, stored or, when it has too many chains or the choice says so, generated on demand
+ * by {@link dev.morse.implicit.ImplicitHomology}), reduces it by the chosen acyclic matching and computes homology, returning a
  * {@link HomologyReport} with the time of each phase ({@code read}, {@code complex}, then
  * {@code match}, {@code verify}, {@code sweep}, {@code reduce}, {@code homology} as they ran).
  * Stateless.
@@ -127,16 +130,34 @@ public final class HomologyPipeline {
 
     private static HomologyReport fromPoset(String source, Poset poset, HomologyOptions options, PhaseTiming read) {
         long start = System.nanoTime();
-        Optional<CwPosetVerdict> verdict = options.complex() == ComplexChoice.ORDER
+        ComplexChoice choice = options.complex();
+        Optional<CwPosetVerdict> verdict = choice == ComplexChoice.ORDER || choice == ComplexChoice.IMPLICIT
                 ? Optional.empty()
                 : Optional.of(CwPosetCheck.check(poset));
         boolean cellular = verdict.map(CwPosetVerdict::isCwPoset).orElse(false);
-        if (options.complex() == ComplexChoice.CELLULAR && !cellular) {
+        if (choice == ComplexChoice.CELLULAR && !cellular) {
             throw new InputException(source, InputException.NO_LINE,
                     "the cellular complex needs a CW poset, and this is not one: " + verdict.orElseThrow().reason());
         }
+        if (choice == ComplexChoice.IMPLICIT) {
+            return ImplicitRun.run(source, poset, verdict, options, "", read, PhaseTiming.since(COMPLEX, start));
+        }
+        ComplexEngine engine = ComplexEngine.STORED;
+        if (choice == ComplexChoice.AUTO && !cellular) {
+            if (options.matching().equals(NO_MATCHING)) {
+                engine = ComplexEngine.explicit("the full Smith normal form on every chain (matching none) stores them");
+            } else {
+                Optional<String> implicit = ImplicitRun.reasonForImplicit(poset, options);
+                if (implicit.isPresent()) {
+                    return ImplicitRun.run(source, poset, verdict, options, implicit.get(), read,
+                            PhaseTiming.since(COMPLEX, start));
+                }
+                engine = ComplexEngine.explicit(ImplicitRun.reasonForStored(poset, options));
+            }
+        }
         ChainComplex complex = cellular ? CellularComplex.of(poset) : orderComplex(source, poset);
-        return finish(source, InputFormat.POSET, complex, verdict, options, read, PhaseTiming.since(COMPLEX, start));
+        return finish(source, InputFormat.POSET, complex, verdict, options, read, PhaseTiming.since(COMPLEX, start),
+                engine);
     }
 
     private static HomologyReport fromFacets(String source, Facets facets, HomologyOptions options, PhaseTiming read) {
@@ -152,7 +173,7 @@ public final class HomologyPipeline {
             throw tooLarge(source, e);
         }
         return finish(source, InputFormat.SIMPLICIAL, complex, Optional.empty(), options, read,
-                PhaseTiming.since(COMPLEX, start));
+                PhaseTiming.since(COMPLEX, start), ComplexEngine.STORED);
     }
 
     /** The order complex; the complexes report too many cells by an IllegalStateException before building any. */
@@ -169,7 +190,8 @@ public final class HomologyPipeline {
     }
 
     private static HomologyReport finish(String source, InputFormat format, ChainComplex complex,
-            Optional<CwPosetVerdict> verdict, HomologyOptions options, PhaseTiming read, PhaseTiming build) {
+            Optional<CwPosetVerdict> verdict, HomologyOptions options, PhaseTiming read, PhaseTiming build,
+            ComplexEngine engine) {
         MatchingHeuristic heuristic = MatchingHeuristics.byName(options.matching()).orElseThrow();
         MorseReduction.Outcome outcome = MorseReduction.run(complex, new MorseReduction.Request(heuristic,
                 new MatchingOptions(options.seed()), options.coefficients(), options.verify()));
@@ -182,8 +204,9 @@ public final class HomologyPipeline {
             timings.add(PhaseTiming.since(TRIALS, start));
         }
         Homology homology = options.reduced() ? outcome.homology().toReduced() : outcome.homology();
-        return new HomologyReport(source, format, complex.kind(), boxed(outcome.cells()), heuristic.name(),
-                boxed(outcome.critical()), homology, verdict, timings, outcome.rounds(), outcome.lowerBound(), trials);
+        return new HomologyReport(source, format, complex.kind(), Arrays.stream(outcome.cells()).asLongStream().boxed()
+                .toList(), heuristic.name(), boxed(outcome.critical()), homology, verdict, timings, outcome.rounds(),
+                outcome.lowerBound(), trials, engine);
     }
 
     private static List<Integer> boxed(int[] counts) {

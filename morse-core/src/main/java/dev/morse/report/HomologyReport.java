@@ -18,7 +18,8 @@ import java.util.Optional;
  * @param input the input file name as the user gave it
  * @param format the format the input was read in
  * @param complex which chain complex was built
- * @param cells cells per dimension of that complex, from dimension 0
+ * @param cells cells per dimension of that complex, from dimension 0 (longs: an order complex
+ *     generated on demand may have more than 2^31 cells in a dimension)
  * @param matching the name of the acyclic matching used ({@code none} for none)
  * @param critical critical cells per dimension of that matching; equal to {@code cells} for {@code none}
  * @param homology the homology, with its coefficients and whether it is reduced
@@ -30,12 +31,13 @@ import java.util.Optional;
  *     unreduced homology (Forman 1998)
  * @param trials the spread of critical-cell vectors over repeated seeded runs of the matching (empty
  *     when only one run was asked for)
+ * @param engine whether the cells were stored or, for the order complex, generated on demand
  */
 public record HomologyReport(
         String input,
         InputFormat format,
         ComplexKind complex,
-        List<Integer> cells,
+        List<Long> cells,
         String matching,
         List<Integer> critical,
         Homology homology,
@@ -43,7 +45,8 @@ public record HomologyReport(
         List<PhaseTiming> timings,
         List<ReductionRound> rounds,
         long morseLowerBound,
-        List<TrialCount> trials) {
+        List<TrialCount> trials,
+        ComplexEngine engine) {
 
     /** Validates and copies. */
     public HomologyReport {
@@ -53,6 +56,7 @@ public record HomologyReport(
         Objects.requireNonNull(matching, "matching");
         Objects.requireNonNull(homology, "homology");
         Objects.requireNonNull(cwCheck, "cwCheck");
+        Objects.requireNonNull(engine, "engine");
         cells = List.copyOf(cells);
         critical = List.copyOf(critical);
         timings = List.copyOf(timings);
@@ -71,14 +75,22 @@ public record HomologyReport(
         }
     }
 
+    /** A report of a run whose cells were all stored. */
+    public HomologyReport(String input, InputFormat format, ComplexKind complex, List<Long> cells, String matching,
+            List<Integer> critical, Homology homology, Optional<CwPosetVerdict> cwCheck, List<PhaseTiming> timings,
+            List<ReductionRound> rounds, long morseLowerBound, List<TrialCount> trials) {
+        this(input, format, complex, cells, matching, critical, homology, cwCheck, timings, rounds, morseLowerBound,
+                trials, ComplexEngine.STORED);
+    }
+
     /**
      * A report of a run without algebraic rounds or trials, the lower bound taken from
      * {@code homology}, which must then be unreduced.
      */
-    public HomologyReport(String input, InputFormat format, ComplexKind complex, List<Integer> cells, String matching,
+    public HomologyReport(String input, InputFormat format, ComplexKind complex, List<Long> cells, String matching,
             List<Integer> critical, Homology homology, Optional<CwPosetVerdict> cwCheck, List<PhaseTiming> timings) {
         this(input, format, complex, cells, matching, critical, homology, cwCheck, timings, List.of(),
-                MorseReduction.lowerBound(homology), List.of());
+                MorseReduction.lowerBound(homology), List.of(), ComplexEngine.STORED);
     }
 
     /** Critical cells beyond the Morse lower bound. */
@@ -98,7 +110,7 @@ public record HomologyReport(
 
     /** Total number of cells of the complex. */
     public long totalCells() {
-        return cells.stream().mapToLong(Integer::longValue).sum();
+        return cells.stream().mapToLong(Long::longValue).reduce(0, Math::addExact);
     }
 
     /** Total number of critical cells. */

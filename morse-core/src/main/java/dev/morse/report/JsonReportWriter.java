@@ -26,7 +26,10 @@ import java.util.List;
  * one, or {@code null} when no check was made), {@code morse_lower_bound} and {@code excess} (critical
  * cells beyond it), {@code rounds} (cells left after each algebraic reduction round), {@code trials}
  * (critical vectors and how often each occurred, when several seeded runs were asked for) and
- * {@code timings_ms} (phase name to milliseconds). Torsion factors are JSON integers of
+ * {@code timings_ms} (phase name to milliseconds). {@code engine} says whether the cells were stored
+ * ({@code explicit}) or, for an order complex, generated on demand ({@code implicit}), with
+ * {@code engine_reason} when the choice was automatic and, for the implicit engine, {@code implicit}:
+ * its element order and what its walk over maximal chains did. Torsion factors are JSON integers of
  * any size. Streams through Jackson's {@link JsonGenerator}; holds nothing.
  */
 public final class JsonReportWriter {
@@ -56,6 +59,7 @@ public final class JsonReportWriter {
             json.writeStringField("input", report.input());
             json.writeStringField("format", report.format().name().toLowerCase(java.util.Locale.ROOT));
             json.writeStringField("complex", report.complex().reportName());
+            json.writeStringField("engine", report.engine().name());
             writeIntArray(json, "cells", report.cells());
             json.writeStringField("matching", report.matching());
             writeIntArray(json, "critical", report.critical());
@@ -69,6 +73,7 @@ public final class JsonReportWriter {
                 writeTrials(json, report.trials());
             }
             writeCwCheck(json, report);
+            writeEngine(json, report.engine());
             writeTimings(json, report.timings());
             json.writeEndObject();
         }
@@ -88,10 +93,10 @@ public final class JsonReportWriter {
         return printer;
     }
 
-    private static void writeIntArray(JsonGenerator json, String field, List<Integer> values) throws IOException {
+    private static void writeIntArray(JsonGenerator json, String field, List<? extends Number> values) throws IOException {
         json.writeArrayFieldStart(field);
-        for (int v : values) {
-            json.writeNumber(v);
+        for (Number v : values) {
+            json.writeNumber(v.longValue());
         }
         json.writeEndArray();
     }
@@ -152,6 +157,22 @@ public final class JsonReportWriter {
             json.writeStringField("reason", verdict.reason());
         }
         json.writeEndObject();
+    }
+
+    private static void writeEngine(JsonGenerator json, ComplexEngine engine) throws IOException {
+        if (!engine.reason().isEmpty()) {
+            json.writeStringField("engine_reason", engine.reason());
+        }
+        if (engine.implicit().isPresent()) {
+            ComplexEngine.ImplicitRun run = engine.implicit().get();
+            json.writeObjectFieldStart("implicit");
+            json.writeStringField("element_order", run.elementOrder());
+            json.writeNumberField("chains_walked", run.search().nodes());
+            json.writeNumberField("maximal_chains_reached", run.search().facets());
+            json.writeNumberField("subtrees_skipped", run.search().skippedSubtrees());
+            json.writeNumberField("defective_fibres", run.search().defectiveFacets());
+            json.writeEndObject();
+        }
     }
 
     private static void writeTimings(JsonGenerator json, List<PhaseTiming> timings) throws IOException {

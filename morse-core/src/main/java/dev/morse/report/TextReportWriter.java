@@ -35,6 +35,7 @@ public final class TextReportWriter {
         }
         row(text, "cells", countsLine(report.cells()));
         row(text, "matching", matchingLine(report));
+        report.engine().implicit().ifPresent(run -> row(text, "walk", walkLine(run)));
         row(text, "bound", "Morse lower bound " + report.morseLowerBound() + ", excess " + report.excess());
         for (ReductionRound round : report.rounds()) {
             row(text, "round " + round.round(), round.pairsRemoved() + " pairs removed, left "
@@ -82,7 +83,9 @@ public final class TextReportWriter {
     private static String complexLine(HomologyReport report) {
         return switch (report.complex()) {
             case CELLULAR -> "cellular, one cell per element of the poset";
-            case ORDER -> "order complex, one simplex per chain of the poset";
+            case ORDER -> report.engine().isImplicit()
+                    ? "order complex, one simplex per chain of the poset, chains generated on demand (implicit engine)"
+                    : "order complex, one simplex per chain of the poset";
             case SIMPLICIAL -> "simplicial, all faces of the listed faces";
         };
     }
@@ -92,28 +95,35 @@ public final class TextReportWriter {
         if (report.format() != InputFormat.POSET) {
             return null;
         }
-        return report.cwCheck()
+        String cw = report.cwCheck()
                 .map(v -> v.isCwPoset() ? "the poset is a CW poset" : "not a CW poset: " + v.reason())
                 .orElse("chosen without checking for a CW poset");
+        return report.engine().reason().isEmpty() ? cw : cw + "; " + report.engine().reason();
     }
 
-    private static String countsLine(List<Integer> counts) {
-        long total = counts.stream().mapToLong(Integer::longValue).sum();
+    private static String countsLine(List<? extends Number> counts) {
+        long total = counts.stream().mapToLong(Number::longValue).sum();
         if (counts.isEmpty()) {
             return "none";
         }
         StringJoiner byDimension = new StringJoiner(" + ");
-        counts.forEach(c -> byDimension.add(Integer.toString(c)));
+        counts.forEach(c -> byDimension.add(Long.toString(c.longValue())));
         return counts.size() == 1
                 ? total + " in dimension 0"
                 : total + " = " + byDimension + " in dimensions 0.." + (counts.size() - 1);
     }
 
     private static String matchingLine(HomologyReport report) {
-        if (report.critical().equals(report.cells())) {
+        if (report.critical().stream().map(Integer::longValue).toList().equals(report.cells())) {
             return report.matching() + ", every cell is critical";
         }
         return report.matching() + ", critical cells " + countsLine(report.critical());
+    }
+
+    private static String walkLine(ComplexEngine.ImplicitRun run) {
+        return String.format(Locale.ROOT, "element order %s: %d chains from the bottom walked, %d maximal chains"
+                + " reached, %d subtrees skipped, %d defective fibres", run.elementOrder(), run.search().nodes(),
+                run.search().facets(), run.search().skippedSubtrees(), run.search().defectiveFacets());
     }
 
     private static String ringName(Coefficients coefficients) {

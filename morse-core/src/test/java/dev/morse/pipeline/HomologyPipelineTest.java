@@ -33,7 +33,7 @@ class HomologyPipelineTest {
         HomologyReport report = HomologyPipeline.run("circle.poset", CIRCLE, DEFAULTS);
         assertEquals(InputFormat.POSET, report.format());
         assertEquals(ComplexKind.CELLULAR, report.complex());
-        assertEquals(List.of(2, 2), report.cells());
+        assertEquals(List.of(2L, 2L), report.cells());
         // the default coreduction leaves one vertex and one edge: the Morse lower bound 1 + 1 (Forman 1998)
         assertEquals(List.of(1, 1), report.critical());
         assertEquals(0, report.excess());
@@ -48,7 +48,7 @@ class HomologyPipelineTest {
         // Δ of the circle's face poset is its barycentric subdivision, a 4-cycle: again Z, Z
         HomologyReport report = HomologyPipeline.run("circle.poset", CIRCLE, DEFAULTS.withComplex(ComplexChoice.ORDER));
         assertEquals(ComplexKind.ORDER, report.complex());
-        assertEquals(List.of(4, 4), report.cells());
+        assertEquals(List.of(4L, 4L), report.cells());
         assertTrue(report.cwCheck().isEmpty());
         assertArrayEquals(new int[] {1, 1}, report.homology().bettiNumbers());
     }
@@ -95,7 +95,7 @@ class HomologyPipelineTest {
         HomologyReport report = HomologyPipeline.run(file, DEFAULTS);
         assertEquals(InputFormat.SIMPLICIAL, report.format());
         assertEquals(file.toString(), report.input());
-        assertEquals(List.of(2, 1), report.cells());
+        assertEquals(List.of(2L, 1L), report.cells());
     }
 
     @Test

@@ -31,7 +31,7 @@ class JsonReportWriterTest {
                 new HomologyGroup(1, 1, List.of(BigInteger.TWO)),
                 HomologyGroup.free(2, 0)));
         return new HomologyReport("klein.simplicial", InputFormat.SIMPLICIAL, ComplexKind.SIMPLICIAL,
-                List.of(8, 24, 16), "none", List.of(8, 24, 16), homology, Optional.empty(), TIMINGS);
+                List.of(8L, 24L, 16L), "none", List.of(8, 24, 16), homology, Optional.empty(), TIMINGS);
     }
 
     @SuppressWarnings("unchecked")
@@ -61,7 +61,7 @@ class JsonReportWriterTest {
     @Test
     void extraFieldsDescribeTheRun() {
         Map<String, Object> json = json(kleinBottle());
-        assertEquals(List.of("input", "format", "complex", "cells", "matching", "critical", "coefficients",
+        assertEquals(List.of("input", "format", "complex", "engine", "cells", "matching", "critical", "coefficients",
                 "reduced", "homology", "morse_lower_bound", "excess", "rounds", "cw_check", "timings_ms"),
                 List.copyOf(json.keySet()));
         assertEquals("klein.simplicial", json.get("input"));
@@ -80,7 +80,7 @@ class JsonReportWriterTest {
                 HomologyGroup.free(0, 1), new HomologyGroup(1, 0, List.of(p)), HomologyGroup.free(2, 0),
                 HomologyGroup.free(3, 1)));
         HomologyReport report = new HomologyReport("lens.poset", InputFormat.POSET, ComplexKind.CELLULAR,
-                List.of(1, 1, 1, 1), "none", List.of(1, 1, 1, 1), homology,
+                List.of(1L, 1L, 1L, 1L), "none", List.of(1, 1, 1, 1), homology,
                 Optional.of(CwPosetVerdict.passed()), TIMINGS);
         String text = JsonReportWriter.toJson(report);
         assertTrue(text.contains("\"torsion\": [ " + p + " ]"), text);

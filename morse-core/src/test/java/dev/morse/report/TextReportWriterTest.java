@@ -41,7 +41,7 @@ class TextReportWriterTest {
         // a single edge over one vertex: Δ is a segment, contractible (common practice)
         Homology homology = new Homology(Coefficients.INTEGERS, true,
                 List.of(HomologyGroup.free(0, 0), HomologyGroup.free(1, 0)));
-        HomologyReport report = new HomologyReport("loop.poset", InputFormat.POSET, ComplexKind.ORDER, List.of(2, 1),
+        HomologyReport report = new HomologyReport("loop.poset", InputFormat.POSET, ComplexKind.ORDER, List.of(2L, 1L),
                 "none", List.of(2, 1), homology, Optional.of(new CwPosetVerdict(false, "an edge with one end")),
                 List.of());
         String text = TextReportWriter.toText(report);

@@ -71,7 +71,8 @@ abstract class SparseElimination {
             }
         }
         for (int c = 0; c < columnCount; c++) {
-            columnRows[c] = columnLength[c] == 0 ? NO_ENTRIES : new int[columnLength[c]];
+            // Slack of two: a row operation often adds an entry just before the pivot row leaves.
+            columnRows[c] = columnLength[c] == 0 ? NO_ENTRIES : new int[columnLength[c] + 2];
             columnLength[c] = 0;
         }
         for (int r = 0; r < rowCount; r++) {

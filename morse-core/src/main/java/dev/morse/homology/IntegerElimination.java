@@ -58,8 +58,9 @@ final class IntegerElimination extends SparseElimination {
     /** Rational scale of each row relative to the Schur complement (DETERMINANT mode; null = 1). */
     private BigInteger[] scaleNumerator;
     private BigInteger[] scaleDenominator;
-    private BigInteger determinantNumerator = BigInteger.ONE;
-    private BigInteger determinantDenominator = BigInteger.ONE;
+    /** Factors of the product of pivots, multiplied out at the end by a balanced product tree. */
+    private final List<BigInteger> determinantNumerator = new ArrayList<>();
+    private final List<BigInteger> determinantDenominator = new ArrayList<>();
     private final RowBuffer first = new RowBuffer();
     private final RowBuffer second = new RowBuffer();
     private int[] pivotColumnRows = new int[16];
@@ -216,11 +217,25 @@ final class IntegerElimination extends SparseElimination {
      * @throws IllegalStateException if the tracked product is not an integer (an internal error)
      */
     BigInteger pivotDeterminant() {
-        BigInteger[] qr = determinantNumerator.divideAndRemainder(determinantDenominator);
+        BigInteger[] qr = product(determinantNumerator, 0, determinantNumerator.size())
+                .divideAndRemainder(product(determinantDenominator, 0, determinantDenominator.size()));
         if (qr[1].signum() != 0) {
             throw new IllegalStateException("product of pivots is not an integer");
         }
         return qr[0];
+    }
+
+    /** The product of {@code factors[from, to)}, halving recursively to keep operands balanced. */
+    private static BigInteger product(List<BigInteger> factors, int from, int to) {
+        if (to - from <= 8) {
+            BigInteger p = BigInteger.ONE;
+            for (int i = from; i < to; i++) {
+                p = p.multiply(factors.get(i));
+            }
+            return p;
+        }
+        int middle = (from + to) >>> 1;
+        return product(factors, from, middle).multiply(product(factors, middle, to));
     }
 
     /** How many row operations overflowed long and were redone in BigInteger. */
@@ -399,11 +414,13 @@ final class IntegerElimination extends SparseElimination {
         if (mode == Mode.DETERMINANT) {
             // The Schur complement pivot is the stored value divided by the row's scale.
             BigInteger p = value(r, position(r, c));
-            determinantNumerator = determinantNumerator.multiply(p).multiply(scale(scaleDenominator, r));
-            determinantDenominator = determinantDenominator.multiply(scale(scaleNumerator, r));
-            BigInteger g = determinantNumerator.gcd(determinantDenominator);
-            determinantNumerator = determinantNumerator.divide(g);
-            determinantDenominator = determinantDenominator.divide(g);
+            if (!p.equals(BigInteger.ONE)) {
+                determinantNumerator.add(p);
+            }
+            if (scaleNumerator[r] != null) {
+                determinantNumerator.add(scaleDenominator[r]);
+                determinantDenominator.add(scaleNumerator[r]);
+            }
         } else if (mode == Mode.SMITH_MODULO) {
             BigInteger p = value(r, position(r, c)).abs();
             if (p.compareTo(BigInteger.ONE) > 0) {

@@ -2,7 +2,9 @@ package dev.morse.homology;
 
 import java.math.BigInteger;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * Smith normal form of sparse integer matrices: the production path used for homology.
@@ -59,8 +61,10 @@ public final class SmithNormalForm {
 
         int diagonalLength = Math.min(coreRows, coreColumns);
         List<BigInteger> diagonal = new ArrayList<>();
+        // Pivots repeat (often all 2): one gcd with the long modulus per distinct value.
+        Map<BigInteger, BigInteger> gcdWithModulus = new HashMap<>();
         for (BigInteger pivot : elimination.nonUnitPivots()) {
-            diagonal.add(pivot.gcd(modulus));
+            diagonal.add(gcdWithModulus.computeIfAbsent(pivot, modulus::gcd));
         }
         for (int k = elimination.pivotCount() - unitRank; k < diagonalLength; k++) {
             diagonal.add(modulus);

@@ -117,7 +117,7 @@ abstract class SparseElimination {
         long bestCost = Long.MAX_VALUE;
         int searched = 0;
         int k = 1;
-        while (true) {
+        while (rowSearch.size() + columnSearch.size() > 0) {
             int kc = columnSearch.nextCount(k);
             int kr = rowSearch.nextCount(k);
             if (kc < 0 && kr < 0) {
@@ -175,6 +175,7 @@ abstract class SparseElimination {
             }
             k++;
         }
+        return best;
     }
 
     /**
@@ -185,9 +186,12 @@ abstract class SparseElimination {
         CountBuckets parked = rows ? rowParked : columnParked;
         int[] found = new int[Math.min(limit, parked.size())];
         int n = 0;
-        for (int k = parked.nextCount(1); k >= 0 && n < found.length; k = parked.nextCount(k + 1)) {
+        for (int k = parked.nextCount(1); k >= 0; k = parked.nextCount(k + 1)) {
             for (int line = parked.first(k); line >= 0 && n < found.length; line = parked.after(line)) {
                 found[n++] = line;
+            }
+            if (n == found.length) {
+                break;
             }
         }
         return found;

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.math.BigInteger;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
@@ -58,7 +59,7 @@ class DeterminantalDivisorsTest {
         if (rows.length == 1) {
             return BigInteger.valueOf(a[rows[0]][columns[0]]);
         }
-        int[] rest = java.util.Arrays.copyOfRange(rows, 1, rows.length);
+        int[] rest = Arrays.copyOfRange(rows, 1, rows.length);
         BigInteger sum = BigInteger.ZERO;
         for (int j = 0; j < columns.length; j++) {
             long entry = a[rows[0]][columns[j]];

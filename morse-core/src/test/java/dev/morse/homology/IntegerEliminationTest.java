@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Random;
 import org.junit.jupiter.api.Test;
 
 /** The engine's modes directly, to see that long overflow is met and recovered exactly. */
@@ -38,7 +39,7 @@ class IntegerEliminationTest {
     @Test
     void determinantOfAUnimodularDisguise() {
         // U·diag(3, 5, 7)·V with det U = det V = 1 has determinant ±105.
-        long[][] a = RandomMatrices.disguisedDiagonal(new java.util.Random(3), 3, 3, new long[] {3, 5, 7}, 30);
+        long[][] a = RandomMatrices.disguisedDiagonal(new Random(3), 3, 3, new long[] {3, 5, 7}, 30);
         IntegerElimination d = new IntegerElimination(SparseIntegerMatrix.fromDense(a, 3), IntegerElimination.Mode.UNITS)
                 .run().copyForDeterminant().run();
         assertEquals(BigInteger.valueOf(105), d.pivotDeterminant().abs());

@@ -107,6 +107,7 @@ final class RandomMatrices {
         return list;
     }
 
+    /** The sparse form of {@code a}, which has {@code columns} columns. */
     static SparseIntegerMatrix matrix(long[][] a, int columns) {
         return SparseIntegerMatrix.fromDense(a, columns);
     }

@@ -17,7 +17,8 @@ import java.util.Arrays;
  * acceptable entry is parked, and comes back only when one of its entries changes.
  *
  * <p>Memory: per active entry 4 bytes in its row and 4 in its column (plus up to half again as
- * growth slack); per line about 40 bytes of bookkeeping.
+ * growth slack); per line about 60 bytes of bookkeeping (array headers, lengths, and a place in
+ * the search and parked bucket queues).
  */
 abstract class SparseElimination {
     /** How many lines holding an acceptable pivot the search looks at before settling. */

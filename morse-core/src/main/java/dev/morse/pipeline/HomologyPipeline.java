@@ -1,18 +1,23 @@
 package dev.morse.pipeline;
 
-import dev.morse.complex.CellularComplex;
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.complex.CwPosetCheck;
+import dev.morse.complex.ComplexSelection;
+import dev.morse.complex.ComplexSelector;
 import dev.morse.complex.CwPosetVerdict;
 import dev.morse.complex.Facets;
-import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.homology.Homology;
 import dev.morse.io.InputException;
 import dev.morse.io.InputFormat;
 import dev.morse.io.PosetReader;
 import dev.morse.io.SimplicialReader;
+import dev.morse.matching.MatchingHeuristic;
+import dev.morse.matching.MatchingHeuristics;
+import dev.morse.matching.MatchingOptions;
+import dev.morse.matching.MatchingTrials;
+import dev.morse.matching.TrialCount;
+import dev.morse.morse.MorseReduction;
 import dev.morse.poset.Poset;
 import dev.morse.report.HomologyReport;
 import dev.morse.report.PhaseTiming;
@@ -22,12 +27,6 @@ import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import dev.morse.matching.MatchingHeuristic;
-import dev.morse.matching.MatchingHeuristics;
-import dev.morse.matching.MatchingOptions;
-import dev.morse.matching.MatchingTrials;
-import dev.morse.matching.TrialCount;
-import dev.morse.morse.MorseReduction;
 import java.util.List;
 import java.util.Optional;
 
@@ -127,16 +126,17 @@ public final class HomologyPipeline {
 
     private static HomologyReport fromPoset(String source, Poset poset, HomologyOptions options, PhaseTiming read) {
         long start = System.nanoTime();
-        Optional<CwPosetVerdict> verdict = options.complex() == ComplexChoice.ORDER
-                ? Optional.empty()
-                : Optional.of(CwPosetCheck.check(poset));
-        boolean cellular = verdict.map(CwPosetVerdict::isCwPoset).orElse(false);
-        if (options.complex() == ComplexChoice.CELLULAR && !cellular) {
+        ComplexSelection selection;
+        try {
+            selection = ComplexSelector.selectWithVerdict(poset, options.complex());
+        } catch (IllegalArgumentException notCw) {
             throw new InputException(source, InputException.NO_LINE,
-                    "the cellular complex needs a CW poset, and this is not one: " + verdict.orElseThrow().reason());
+                    "the cellular complex needs a CW poset, and this is not one: " + notCw.getMessage());
+        } catch (IllegalStateException e) {
+            throw tooLarge(source, e);
         }
-        ChainComplex complex = cellular ? CellularComplex.of(poset) : orderComplex(source, poset);
-        return finish(source, InputFormat.POSET, complex, verdict, options, read, PhaseTiming.since(COMPLEX, start));
+        return finish(source, InputFormat.POSET, selection.complex(), selection.verdict(), options, read,
+                PhaseTiming.since(COMPLEX, start));
     }
 
     private static HomologyReport fromFacets(String source, Facets facets, HomologyOptions options, PhaseTiming read) {
@@ -153,15 +153,6 @@ public final class HomologyPipeline {
         }
         return finish(source, InputFormat.SIMPLICIAL, complex, Optional.empty(), options, read,
                 PhaseTiming.since(COMPLEX, start));
-    }
-
-    /** The order complex; the complexes report too many cells by an IllegalStateException before building any. */
-    private static ChainComplex orderComplex(String source, Poset poset) {
-        try {
-            return OrderComplex.of(poset);
-        } catch (IllegalStateException e) {
-            throw tooLarge(source, e);
-        }
     }
 
     private static InputException tooLarge(String source, IllegalStateException e) {

@@ -33,7 +33,7 @@ class HomologyCalculatorTest {
         for (int k = 1; k <= n; k++) {
             boundaries[k] = k % 2 == 0 ? new int[][] {{0, 0, 2}} : new int[0][];
         }
-        return ListedComplex.cellular(counts, boundaries);
+        return TestComplexes.cellular(counts, boundaries);
     }
 
     @Test
@@ -57,7 +57,7 @@ class HomologyCalculatorTest {
     @Test
     void sixVertexProjectivePlane() {
         // REFERENCES.md: RP^2 has H = Z, Z/2, 0 (Hatcher Example 2.42).
-        ChainComplex rp2 = ListedComplex.simplicial(Triangulations.projectivePlane());
+        ChainComplex rp2 = TestComplexes.simplicial(Triangulations.projectivePlane());
         assertEquals(List.of(6, 15, 10), List.of(rp2.cellCount(0), rp2.cellCount(1), rp2.cellCount(2)));
         assertEquals(List.of("Z", "Z/2", "0"), groups(HomologyCalculator.compute(rp2, Z)));
         assertEquals(List.of("Z", "0", "0"), groups(HomologyCalculator.compute(rp2, Q)));
@@ -67,7 +67,7 @@ class HomologyCalculatorTest {
     @Test
     void sevenVertexTorus() {
         // The torus: Z, Z^2, Z (REFERENCES.md; Hatcher Example 2.3 and §2.1).
-        ChainComplex torus = ListedComplex.simplicial(Triangulations.sevenVertexTorus());
+        ChainComplex torus = TestComplexes.simplicial(Triangulations.sevenVertexTorus());
         assertEquals(List.of(7, 21, 14), List.of(torus.cellCount(0), torus.cellCount(1), torus.cellCount(2)));
         assertEquals(List.of("Z", "Z^2", "Z"), groups(HomologyCalculator.compute(torus, Z)));
     }
@@ -76,9 +76,9 @@ class HomologyCalculatorTest {
     void largeGridTorusAndKleinBottle() {
         // Hatcher §2.1 (square models): torus Z, Z^2, Z; Klein bottle Z, Z + Z/2, 0. A 40×40 grid
         // makes boundary matrices of a few thousand rows, all handled by the sparse path.
-        ChainComplex torus = ListedComplex.simplicial(Triangulations.gridSurface(40, false));
+        ChainComplex torus = TestComplexes.simplicial(Triangulations.gridSurface(40, false));
         assertEquals(List.of("Z", "Z^2", "Z"), groups(HomologyCalculator.compute(torus, Z)));
-        ChainComplex klein = ListedComplex.simplicial(Triangulations.gridSurface(40, true));
+        ChainComplex klein = TestComplexes.simplicial(Triangulations.gridSurface(40, true));
         assertEquals(List.of("Z", "Z + Z/2", "0"), groups(HomologyCalculator.compute(klein, Z)));
         assertEquals(List.of("Z", "Z", "0"), groups(HomologyCalculator.compute(klein, Q)));
         assertEquals(List.of("Z", "Z^2", "Z"), groups(HomologyCalculator.compute(klein, Coefficients.modulo(2))));
@@ -88,7 +88,7 @@ class HomologyCalculatorTest {
     @Test
     void threeTorusFollowsKunneth() {
         // Künneth (Hatcher Theorem 3B.6): H_k(T^3) = Z^C(3,k).
-        ChainComplex t3 = ListedComplex.simplicial(Triangulations.threeTorus(4));
+        ChainComplex t3 = TestComplexes.simplicial(Triangulations.threeTorus(4));
         assertEquals(List.of("Z", "Z^3", "Z^3", "Z"), groups(HomologyCalculator.compute(t3, Z)));
     }
 
@@ -97,7 +97,7 @@ class HomologyCalculatorTest {
         // The boundary of the d-simplex is S^(d-1) (REFERENCES.md): reduced homology Z in
         // dimension d-1 only.
         for (int d = 1; d <= 5; d++) {
-            ChainComplex sphere = ListedComplex.simplicial(Triangulations.simplexBoundary(d));
+            ChainComplex sphere = TestComplexes.simplicial(Triangulations.simplexBoundary(d));
             Homology reduced = HomologyCalculator.compute(sphere, Z, true);
             assertTrue(reduced.reduced());
             for (int k = 0; k < d; k++) {
@@ -113,7 +113,7 @@ class HomologyCalculatorTest {
         // One cell in each of dimensions 0, 1, 2, the 2-cell attached with degree m: H_1 = Z/m
         // (Hatcher Example 2.40, the Moore space M(Z/m, 1)).
         int m = Integer.MAX_VALUE;
-        ChainComplex moore = ListedComplex.cellular(new int[] {1, 1, 1}, new int[0][], new int[0][], new int[][] {{0, 0, m}});
+        ChainComplex moore = TestComplexes.cellular(new int[] {1, 1, 1}, new int[0][], new int[0][], new int[][] {{0, 0, m}});
         Homology h = HomologyCalculator.compute(moore, Z);
         assertEquals(List.of(BigInteger.valueOf(m)), h.group(1).torsion());
         assertEquals(0, HomologyCalculator.compute(moore, Coefficients.modulo(3)).group(1).betti());
@@ -127,10 +127,10 @@ class HomologyCalculatorTest {
         // β_k over Q is β_k over Z. Also Σ (-1)^k β_k = Σ (-1)^k f_k over every field (Euler-Poincaré).
         Random random = new Random(5L);
         List<ChainComplex> complexes = new ArrayList<>();
-        complexes.add(ListedComplex.simplicial(Triangulations.projectivePlane()));
-        complexes.add(ListedComplex.simplicial(Triangulations.gridSurface(6, true)));
+        complexes.add(TestComplexes.simplicial(Triangulations.projectivePlane()));
+        complexes.add(TestComplexes.simplicial(Triangulations.gridSurface(6, true)));
         complexes.add(projectiveSpace(6));
-        complexes.add(ListedComplex.cellular(new int[] {1, 2, 1}, new int[0][], new int[0][], new int[][] {{0, 0, 15}, {0, 1, 6}}));
+        complexes.add(TestComplexes.cellular(new int[] {1, 2, 1}, new int[0][], new int[0][], new int[][] {{0, 0, 15}, {0, 1, 6}}));
         for (int n = 0; n < 60; n++) {
             int facets = 1 + random.nextInt(14);
             int[][] f = new int[facets][];
@@ -138,7 +138,7 @@ class HomologyCalculatorTest {
                 int size = 1 + random.nextInt(4);
                 f[i] = random.ints(0, 9).distinct().limit(size).toArray();
             }
-            complexes.add(ListedComplex.simplicial(f));
+            complexes.add(TestComplexes.simplicial(f));
         }
         for (ChainComplex complex : complexes) {
             Homology integral = HomologyCalculator.compute(complex, Z);

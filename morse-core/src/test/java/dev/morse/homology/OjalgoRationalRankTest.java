@@ -1,5 +1,6 @@
 package dev.morse.homology;
 
+import dev.morse.complex.ChainComplex;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
@@ -53,7 +54,7 @@ class OjalgoRationalRankTest {
     @Test
     void boundaryOfTheSevenVertexTorus() {
         // Torus (REFERENCES.md): β = 1, 2, 1 over Q, so rank ∂_1 = 7 - 1 = 6 and rank ∂_2 = 14 - 1 = 13.
-        ListedComplex torus = ListedComplex.simplicial(Triangulations.sevenVertexTorus());
+        ChainComplex torus = TestComplexes.simplicial(Triangulations.sevenVertexTorus());
         assertEquals(6, OjalgoRationalRank.rank(SparseIntegerMatrix.boundaryOf(torus, 1)));
         assertEquals(13, OjalgoRationalRank.rank(SparseIntegerMatrix.boundaryOf(torus, 2)));
     }

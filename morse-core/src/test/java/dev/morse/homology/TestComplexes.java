@@ -4,6 +4,7 @@ import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexKind;
 import dev.morse.complex.GradedCells;
+import dev.morse.complex.ListedComplex;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -15,15 +16,12 @@ import java.util.List;
  * the facets of a simplicial complex (faces ordered, incidence numbers {@code (-1)^i} for dropping
  * the i-th vertex: the standard simplicial boundary).
  */
-final class ListedComplex implements ChainComplex {
-    private final ComplexKind kind;
-    private final GradedCells cells;
-    private final Boundary boundary;
-    private final Boundary coboundary;
+final class TestComplexes {
+    private TestComplexes() {
+    }
 
-    private ListedComplex(ComplexKind kind, int[] counts, List<List<int[]>> entries) {
-        this.kind = kind;
-        cells = new GradedCells(counts);
+    private static ChainComplex build(ComplexKind kind, int[] counts, List<List<int[]>> entries) {
+        GradedCells cells = new GradedCells(counts);
         int total = cells.cellCount();
         int[] offsets = new int[total + 1];
         List<int[]> all = new ArrayList<>();
@@ -44,24 +42,23 @@ final class ListedComplex implements ChainComplex {
         for (int c = 0; c < total; c++) {
             offsets[c + 1] += offsets[c];
         }
-        boundary = new Boundary(offsets, targets, coefficients);
-        coboundary = boundary.transpose(total);
+        return new ListedComplex(kind, cells, new Boundary(offsets, targets, coefficients), c -> "c" + c);
     }
 
     /**
      * A cell complex with {@code counts[d]} cells in dimension d; {@code boundaries[d]} lists the
      * entries {column, row, coefficient} of the boundary from dimension d to d - 1.
      */
-    static ListedComplex cellular(int[] counts, int[][]... boundaries) {
+    static ChainComplex cellular(int[] counts, int[][]... boundaries) {
         List<List<int[]>> entries = new ArrayList<>();
         for (int[][] b : boundaries) {
             entries.add(Arrays.asList(b));
         }
-        return new ListedComplex(ComplexKind.CELLULAR, counts, entries);
+        return build(ComplexKind.CELLULAR, counts, entries);
     }
 
     /** The simplicial complex whose faces are all nonempty subsets of the given facets. */
-    static ListedComplex simplicial(int[][] facets) {
+    static ChainComplex simplicial(int[][] facets) {
         int top = 0;
         for (int[] f : facets) {
             top = Math.max(top, f.length - 1);
@@ -113,51 +110,6 @@ final class ListedComplex implements ChainComplex {
             }
             entries.add(e);
         }
-        return new ListedComplex(ComplexKind.SIMPLICIAL, counts, entries);
-    }
-
-    @Override
-    public ComplexKind kind() {
-        return kind;
-    }
-
-    @Override
-    public int dimension() {
-        return cells.dimension();
-    }
-
-    @Override
-    public int cellCount() {
-        return cells.cellCount();
-    }
-
-    @Override
-    public int cellCount(int d) {
-        return cells.cellCount(d);
-    }
-
-    @Override
-    public int firstCell(int d) {
-        return cells.firstCell(d);
-    }
-
-    @Override
-    public int dimensionOf(int cell) {
-        return cells.dimensionOf(cell);
-    }
-
-    @Override
-    public Boundary boundary() {
-        return boundary;
-    }
-
-    @Override
-    public Boundary coboundary() {
-        return coboundary;
-    }
-
-    @Override
-    public String cellName(int cell) {
-        return "c" + cell;
+        return build(ComplexKind.SIMPLICIAL, counts, entries);
     }
 }

@@ -1,6 +1,7 @@
 package dev.morse.complex;
 
 import dev.morse.poset.Poset;
+import java.util.Optional;
 
 /**
  * Builds the chain complex of a poset that a {@link ComplexChoice} asks for. Either complex has
@@ -20,17 +21,41 @@ public final class ComplexSelector {
      * @throws IllegalArgumentException for {@link ComplexChoice#IMPLICIT}, which stores no complex
      */
     public static ChainComplex select(Poset poset, ComplexChoice choice) {
-        return switch (choice) {
-            case ORDER -> OrderComplex.of(poset);
-            case CELLULAR -> CellularComplex.of(poset);
-            case IMPLICIT -> throw new IllegalArgumentException(
+        return selectWithVerdict(poset, choice).complex();
+    }
+
+    /**
+     * Like {@link #select}, also returning the CW poset verdict; the poset is analysed once, whatever
+     * the choice.
+     */
+    public static ComplexSelection selectWithVerdict(Poset poset, ComplexChoice choice) {
+        if (choice == ComplexChoice.ORDER) {
+            return new ComplexSelection(OrderComplex.of(poset), Optional.empty());
+        }
+        if (choice == ComplexChoice.IMPLICIT) {
+            throw new IllegalArgumentException(
                     "the implicit order complex stores no cells; dev.morse.implicit.ImplicitHomology computes its homology");
-            case AUTO -> {
-                CwStructure structure = CwPosetCheck.analyse(poset);
-                yield structure.verdict().isCwPoset()
-                        ? CellularComplex.from(poset, structure.coverSigns())
-                        : OrderComplex.of(poset);
-            }
-        };
+        }
+        CellularAttempt attempt = tryCellular(poset);
+        CwPosetVerdict verdict = attempt.verdict();
+        if (attempt.cellular().isPresent()) {
+            return new ComplexSelection(attempt.cellular().get(), Optional.of(verdict));
+        }
+        if (choice == ComplexChoice.CELLULAR) {
+            throw new IllegalArgumentException(verdict.reason());
+        }
+        return new ComplexSelection(OrderComplex.of(poset), Optional.of(verdict));
+    }
+
+    /**
+     * Analyses the poset once and builds the cellular complex if it is a CW poset; builds no order
+     * complex, so a caller can decide whether to store one.
+     */
+    public static CellularAttempt tryCellular(Poset poset) {
+        CwStructure structure = CwPosetCheck.analyse(poset);
+        CwPosetVerdict verdict = structure.verdict();
+        return new CellularAttempt(verdict, verdict.isCwPoset()
+                ? Optional.of(CellularComplex.from(poset, structure.coverSigns()))
+                : Optional.empty());
     }
 }

@@ -3,11 +3,11 @@ package dev.morse.implicit;
 import dev.morse.homology.Coefficients;
 import dev.morse.homology.DenseSmithNormalForm;
 import dev.morse.homology.Homology;
+import dev.morse.homology.HomologyCalculator;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.homology.SmithForm;
 import dev.morse.homology.SparseIntegerMatrix;
 import dev.morse.morse.AlgebraicReduction;
-import dev.morse.morse.MatrixHomology;
 import dev.morse.morse.MorseComplex;
 import dev.morse.morse.PhaseTimes;
 import dev.morse.morse.ReductionRound;
@@ -172,7 +172,8 @@ public final class ImplicitHomology {
             AlgebraicReduction.Result reduced = AlgebraicReduction.reduce(new MorseComplex(counts, boundaries));
             rounds = reduced.rounds();
             long t5 = lap(times, "reduce", t4);
-            homology = MatrixHomology.compute(reduced.reduced(), options.coefficients());
+            MorseComplex left = reduced.reduced();
+            homology = HomologyCalculator.fromBoundaries(left.cellCounts(), left::boundary, options.coefficients());
             lap(times, "homology", t5);
         } else {
             homology = denseHomology(counts, matrices, options.coefficients());

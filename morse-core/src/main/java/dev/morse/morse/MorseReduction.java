@@ -122,7 +122,8 @@ public final class MorseReduction {
         AlgebraicReduction.Result reduced = AlgebraicReduction.reduce(morse);
         long t4 = System.nanoTime();
         times.put("reduce", millis(t3, t4));
-        Homology homology = MatrixHomology.compute(reduced.reduced(), request.coefficients());
+        MorseComplex left = reduced.reduced();
+        Homology homology = HomologyCalculator.fromBoundaries(left.cellCounts(), left::boundary, request.coefficients());
         times.put("homology", millis(t4, System.nanoTime()));
         return new Outcome(request.heuristic().name(), complex.cellCounts(), critical, verdict, reduced.rounds(), homology,
                 new PhaseTimes(times));

@@ -1,10 +1,11 @@
 package dev.morse.pipeline;
 
-import dev.morse.complex.CellularComplex;
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.complex.CwPosetCheck;
+import dev.morse.complex.ComplexSelection;
+import dev.morse.complex.ComplexSelector;
 import dev.morse.complex.CwPosetVerdict;
+import dev.morse.complex.CellularAttempt;
 import dev.morse.complex.Facets;
 import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
@@ -13,6 +14,12 @@ import dev.morse.io.InputException;
 import dev.morse.io.InputFormat;
 import dev.morse.io.PosetReader;
 import dev.morse.io.SimplicialReader;
+import dev.morse.matching.MatchingHeuristic;
+import dev.morse.matching.MatchingHeuristics;
+import dev.morse.matching.MatchingOptions;
+import dev.morse.matching.MatchingTrials;
+import dev.morse.matching.TrialCount;
+import dev.morse.morse.MorseReduction;
 import dev.morse.poset.Poset;
 import dev.morse.report.ComplexEngine;
 import dev.morse.report.HomologyReport;
@@ -24,12 +31,6 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
-import dev.morse.matching.MatchingHeuristic;
-import dev.morse.matching.MatchingHeuristics;
-import dev.morse.matching.MatchingOptions;
-import dev.morse.matching.MatchingTrials;
-import dev.morse.matching.TrialCount;
-import dev.morse.morse.MorseReduction;
 import java.util.List;
 import java.util.Optional;
 
@@ -130,32 +131,54 @@ public final class HomologyPipeline {
 
     private static HomologyReport fromPoset(String source, Poset poset, HomologyOptions options, PhaseTiming read) {
         long start = System.nanoTime();
-        ComplexChoice choice = options.complex();
-        Optional<CwPosetVerdict> verdict = choice == ComplexChoice.ORDER || choice == ComplexChoice.IMPLICIT
-                ? Optional.empty()
-                : Optional.of(CwPosetCheck.check(poset));
-        boolean cellular = verdict.map(CwPosetVerdict::isCwPoset).orElse(false);
-        if (choice == ComplexChoice.CELLULAR && !cellular) {
+        if (options.complex() == ComplexChoice.IMPLICIT) {
+            return ImplicitRun.run(source, poset, Optional.empty(), options, "", read, PhaseTiming.since(COMPLEX, start));
+        }
+        if (options.complex() == ComplexChoice.AUTO) {
+            return automatic(source, poset, options, read, start);
+        }
+        ComplexSelection selection;
+        try {
+            selection = ComplexSelector.selectWithVerdict(poset, options.complex());
+        } catch (IllegalArgumentException notCw) {
             throw new InputException(source, InputException.NO_LINE,
-                    "the cellular complex needs a CW poset, and this is not one: " + verdict.orElseThrow().reason());
+                    "the cellular complex needs a CW poset, and this is not one: " + notCw.getMessage());
+        } catch (IllegalStateException e) {
+            throw tooLarge(source, e);
         }
-        if (choice == ComplexChoice.IMPLICIT) {
-            return ImplicitRun.run(source, poset, verdict, options, "", read, PhaseTiming.since(COMPLEX, start));
+        return finish(source, InputFormat.POSET, selection.complex(), selection.verdict(), options, read,
+                PhaseTiming.since(COMPLEX, start), ComplexEngine.STORED);
+    }
+
+    /**
+     * The cellular complex of a CW poset; else the order complex, stored when its chains are few
+     * enough (or when every chain is needed, for matching none) and generated on demand otherwise.
+     */
+    private static HomologyReport automatic(String source, Poset poset, HomologyOptions options, PhaseTiming read,
+            long start) {
+        CellularAttempt attempt = ComplexSelector.tryCellular(poset);
+        Optional<CwPosetVerdict> verdict = Optional.of(attempt.verdict());
+        if (attempt.cellular().isPresent()) {
+            return finish(source, InputFormat.POSET, attempt.cellular().get(), verdict, options, read,
+                    PhaseTiming.since(COMPLEX, start), ComplexEngine.STORED);
         }
-        ComplexEngine engine = ComplexEngine.STORED;
-        if (choice == ComplexChoice.AUTO && !cellular) {
-            if (options.matching().equals(NO_MATCHING)) {
-                engine = ComplexEngine.explicit("the full Smith normal form on every chain (matching none) stores them");
-            } else {
-                Optional<String> implicit = ImplicitRun.reasonForImplicit(poset, options);
-                if (implicit.isPresent()) {
-                    return ImplicitRun.run(source, poset, verdict, options, implicit.get(), read,
-                            PhaseTiming.since(COMPLEX, start));
-                }
-                engine = ComplexEngine.explicit(ImplicitRun.reasonForStored(poset, options));
+        ComplexEngine engine;
+        if (options.matching().equals(NO_MATCHING)) {
+            engine = ComplexEngine.explicit("the full Smith normal form on every chain (matching none) stores them");
+        } else {
+            Optional<String> implicit = ImplicitRun.reasonForImplicit(poset, options);
+            if (implicit.isPresent()) {
+                return ImplicitRun.run(source, poset, verdict, options, implicit.get(), read,
+                        PhaseTiming.since(COMPLEX, start));
             }
+            engine = ComplexEngine.explicit(ImplicitRun.reasonForStored(poset, options));
         }
-        ChainComplex complex = cellular ? CellularComplex.of(poset) : orderComplex(source, poset);
+        ChainComplex complex;
+        try {
+            complex = OrderComplex.of(poset);
+        } catch (IllegalStateException e) {
+            throw tooLarge(source, e);
+        }
         return finish(source, InputFormat.POSET, complex, verdict, options, read, PhaseTiming.since(COMPLEX, start),
                 engine);
     }
@@ -174,15 +197,6 @@ public final class HomologyPipeline {
         }
         return finish(source, InputFormat.SIMPLICIAL, complex, Optional.empty(), options, read,
                 PhaseTiming.since(COMPLEX, start), ComplexEngine.STORED);
-    }
-
-    /** The order complex; the complexes report too many cells by an IllegalStateException before building any. */
-    private static ChainComplex orderComplex(String source, Poset poset) {
-        try {
-            return OrderComplex.of(poset);
-        } catch (IllegalStateException e) {
-            throw tooLarge(source, e);
-        }
     }
 
     private static InputException tooLarge(String source, IllegalStateException e) {

@@ -26,12 +26,11 @@ import org.junit.jupiter.api.TestFactory;
  * Every poset of the corpus with at most {@value #CHAIN_LIMIT} chains, for every element order: the
  * implicit engine's homology against the manifest (values from the literature, sources in
  * corpus/manifest.json), against the stored order complex reduced by the default matching, and
- * against the full Smith normal form on every chain up to {@value #FULL_SNF_LIMIT} chains (the
- * dense oracle is cubic); its matching written out on the stored complex must pass the verifier.
+ * against the full Smith normal form on every chain; its matching written out on the stored complex
+ * must pass the verifier.
  */
 class ImplicitCorpusTest {
     private static final long CHAIN_LIMIT = 50_000;
-    private static final long FULL_SNF_LIMIT = 3_000;
 
     private static Path corpus() {
         return Path.of(System.getProperty("morse.corpus", "../corpus"));
@@ -50,16 +49,14 @@ class ImplicitCorpusTest {
         Homology stored = MorseReduction.run(complex, new MorseReduction.Request(
                 MatchingHeuristics.byName(MatchingHeuristics.DEFAULT).orElseThrow(), MatchingOptions.DEFAULT,
                 Coefficients.INTEGERS, true)).homology();
-        Homology full = complex.cellCount() <= FULL_SNF_LIMIT ? Oracle.fullSmithNormalForm(poset, Coefficients.INTEGERS) : null;
+        Homology full = Oracle.fullSmithNormalForm(poset, Coefficients.INTEGERS);
         for (ElementOrder order : ElementOrder.values()) {
             String where = c.name() + " with element order " + order.optionName();
             ImplicitHomology.Outcome outcome = ImplicitHomology.run(poset,
                     new ImplicitHomology.Options(order, Coefficients.INTEGERS));
             assertEquals(c.expected(), outcome.homology().groups(), where + " against the manifest");
             assertEquals(stored, outcome.homology(), where + " against the stored order complex");
-            if (full != null) {
-                assertEquals(full, outcome.homology(), where + " against the full Smith normal form");
-            }
+            assertEquals(full, outcome.homology(), where + " against the full Smith normal form");
             assertEquals(Arrays.stream(complex.cellCounts()).asLongStream().boxed().toList(),
                     Arrays.stream(outcome.cells()).boxed().toList(), where + ": chains per dimension");
             MatchingVerdict verdict = MatchingVerifier.verify(complex,

@@ -189,6 +189,36 @@ class HomologyCommandTest {
     }
 
     @Test
+    void implicitOrderComplexGivesTheSameHomology() {
+        // the same 4-cycle, its chains generated on demand: H = Z, Z
+        for (String order : List.of("down-sets", "ids")) {
+            Map<String, Object> json = json(circle, "--complex", "implicit", "--element-order", order);
+            assertEquals("order", json.get("complex"));
+            assertEquals("implicit", json.get("engine"));
+            assertEquals(ints(4, 4), json.get("cells"));
+            assertEquals(ints(1, 1), betti(json));
+        }
+    }
+
+    @Test
+    void automaticChoiceGeneratesChainsOnDemandPastTheLimit() {
+        // the loop is no CW poset and Δ has 3 chains, more than the limit of 2: a segment, contractible
+        Map<String, Object> json = json(loop, "--max-stored-chains", "2");
+        assertEquals("implicit", json.get("engine"));
+        assertEquals("more than 2 chains, too many to store, so the chains are generated on demand",
+                json.get("engine_reason"));
+        assertEquals(ints(1, 0), betti(json));
+    }
+
+    @Test
+    void unknownElementOrderIsAnOptionError() {
+        CliRun run = CliRun.morse("homology", square, "--element-order", "atoms");
+        assertEquals(2, run.code());
+        assertEquals("", run.out());
+        assertTrue(run.err().contains("the element order must be one of down-sets, ids, not 'atoms'"), run.err());
+    }
+
+    @Test
     void matchingNoneMakesEveryCellCritical() {
         Map<String, Object> json = json(square, "--matching", "none");
         assertEquals("none", json.get("matching"));
@@ -277,7 +307,7 @@ class HomologyCommandTest {
         CliRun complex = CliRun.morse("homology", square, "--complex", "sideways");
         assertEquals(2, complex.code());
         assertEquals("", complex.out());
-        assertTrue(complex.errLines().get(0).contains("--complex") && complex.err().contains("auto, order or cellular"),
+        assertTrue(complex.errLines().get(0).contains("--complex") && complex.err().contains("auto, order, cellular or implicit"),
                 complex.err());
         CliRun coefficients = CliRun.morse("homology", square, "--coefficients", "4");
         assertEquals(2, coefficients.code());

@@ -2,7 +2,7 @@
 # Prints the measurement tables recorded in benchmarks/RESULTS.md. Each row runs in its own JVM so
 # that its peak heap is its own; heaps are set tight (64 bytes per cell plus cover, or 256 MiB at
 # least) so that the reported peak reflects live data rather than garbage awaiting collection.
-# Usage: benchmarks/morse-table.sh [parse|morse|speedup|all]   (run from anywhere)
+# Usage: benchmarks/morse-table.sh [parse|morse|speedup|implicit|all]   (run from anywhere)
 set -euo pipefail
 here="$(cd "$(dirname "$0")" && pwd)"
 root="$(dirname "$here")"
@@ -34,4 +34,14 @@ if [ "$what" = speedup ] || [ "$what" = all ]; then
   echo "| block | cells | none ms | coreduction ms | speedup |"
   echo "|---|---|---|---|---|"
   run -Xmx8g -cp "$jar" dev.morse.bench.SpeedupTable coreduction 10 15 22
+fi
+
+if [ "$what" = implicit ] || [ "$what" = all ]; then
+  echo "| poset | element order | elements | chains | maximal chains reached / subtrees skipped | critical | lower bound | excess | generate ms | chains / order / match / sweep / reduce / homology ms | engine ms | peak heap MiB |"
+  echo "|---|---|---|---|---|---|---|---|---|---|---|---|"
+  run -Xmx1g -XX:+UseSerialGC -cp "$jar" dev.morse.bench.ImplicitTable pi:8
+  run -Xmx1g -XX:+UseSerialGC -cp "$jar" dev.morse.bench.ImplicitTable sub:2:5
+  run -Xmx8g -XX:+UseSerialGC -cp "$jar" dev.morse.bench.ImplicitTable pi:9
+  run -Xmx8g -XX:+UseSerialGC -cp "$jar" dev.morse.bench.ImplicitTable pi:9 ids
+  run -Xmx1g -XX:+UseSerialGC -cp "$jar" dev.morse.bench.ImplicitTable bool:13
 fi

@@ -52,7 +52,7 @@ final class HomologyCommand implements Callable<Integer> {
                     + " available: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}).")
     private ElementOrder elementOrder;
 
-    @Option(names = "--max-stored-chains", paramLabel = "N", defaultValue = "2000000",
+    @Option(names = "--max-stored-chains", paramLabel = "N", defaultValue = "1000000",
             description = "With --complex auto, a poset with more chains than this gets its order complex generated"
                     + " on demand instead of stored (default ${DEFAULT-VALUE}).")
     private long maxStoredChains;

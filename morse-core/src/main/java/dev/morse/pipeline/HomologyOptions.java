@@ -24,11 +24,12 @@ public record HomologyOptions(ComplexChoice complex, Coefficients coefficients, 
         long seed, int trials, boolean verify, ElementOrder elementOrder, long storedChainLimit) {
     /**
      * Posets with more chains than this get the implicit order complex under {@link ComplexChoice#AUTO}.
-     * The stored order complex takes some 100 bytes per chain with its matching and verification, so
-     * this keeps it within a few hundred MiB and a few seconds; beyond it the implicit engine is
-     * leaner, and for the posets it matches well, also faster.
+     * Stored, with its matching and verification, the order complex of the proper part of B_8 (545,834
+     * chains, up to dimension 6) needed about 500 MiB of heap and 4 s (benchmarks/RESULTS.md), so this
+     * keeps the stored complex within about a GiB and ten seconds; beyond it the implicit engine is
+     * far leaner, and on the posets it matches well (lattices with an EL-labelling) also faster.
      */
-    public static final long DEFAULT_STORED_CHAIN_LIMIT = 2_000_000;
+    public static final long DEFAULT_STORED_CHAIN_LIMIT = 1_000_000;
 
     /**
      * Validates.

@@ -38,7 +38,7 @@ class ImplicitChoiceTest {
         HomologyReport report = HomologyPipeline.run("loop.poset", LOOP, DEFAULTS);
         assertEquals(ComplexKind.ORDER, report.complex());
         assertFalse(report.engine().isImplicit());
-        assertEquals("3 chains, at most the 2,000,000 stored", report.engine().reason());
+        assertEquals("3 chains, at most the 1,000,000 stored", report.engine().reason());
     }
 
     @Test

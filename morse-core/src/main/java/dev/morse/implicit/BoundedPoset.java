@@ -35,15 +35,11 @@ final class BoundedPoset {
     }
 
     /**
-     * The bounded poset of {@code poset} with covers in the given order.
+     * The bounded poset of {@code poset} with covers tried by ascending rank, such as
+     * {@code order::ranks} for an {@link ElementOrder}.
      *
      * @throws IllegalStateException if the down-sets would take more than {@code maxDownSetBytes}
      */
-    static BoundedPoset of(Poset poset, ElementOrder order, long maxDownSetBytes) {
-        return of(poset, order::ranks, maxDownSetBytes);
-    }
-
-    /** As {@link #of(Poset, ElementOrder, long)} with any ranking of the elements, for tests. */
     static BoundedPoset of(Poset poset, Ranking ranking, long maxDownSetBytes) {
         int n = poset.size();
         long bytes = downSetBytes(n);

@@ -24,7 +24,7 @@ import org.junit.jupiter.api.Test;
  * chains the pruned walk finds against the chains the rule leaves unmatched.
  */
 class ImplicitHomologyPropertyTest {
-    private static final int CASES = 250;
+    private static final int CASES = 400;
 
     private record Case(String name, Poset poset, ElementOrder reported, BoundedPoset.Ranking ranking) {
     }

@@ -84,6 +84,7 @@ public final class TextReportWriter {
             case CELLULAR -> "cellular, one cell per element of the poset";
             case ORDER -> "order complex, one simplex per chain of the poset";
             case SIMPLICIAL -> "simplicial, all faces of the listed faces";
+            case CUBICAL -> "cubical, one cell per elementary cube of the foreground";
         };
     }
 

@@ -2,6 +2,7 @@ package dev.morse.pipeline;
 
 import dev.morse.complex.ComplexChoice;
 import dev.morse.homology.Coefficients;
+import dev.morse.image.ImageOptions;
 import dev.morse.matching.MatchingHeuristics;
 import java.util.Objects;
 
@@ -15,9 +16,12 @@ import java.util.Objects;
  * @param seed the seed of the matching's random choices (and of the first trial)
  * @param trials how many seeded runs of the matching to tally; 1 runs it once
  * @param verify whether to verify the matching before trusting it
+ * @param posetReduction whether to shrink a poset by homology-preserving reductions before its
+ *     order complex is built (never done when the cellular complex is used)
+ * @param image how to read an image or volume input
  */
 public record HomologyOptions(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching,
-        long seed, int trials, boolean verify) {
+        long seed, int trials, boolean verify, boolean posetReduction, ImageOptions image) {
     /**
      * Validates.
      *
@@ -26,13 +30,20 @@ public record HomologyOptions(ComplexChoice complex, Coefficients coefficients, 
     public HomologyOptions {
         Objects.requireNonNull(complex, "complex");
         Objects.requireNonNull(coefficients, "coefficients");
+        Objects.requireNonNull(image, "image");
         matching = HomologyPipeline.requireKnownMatching(matching);
         if (trials < 1) {
             throw new IllegalArgumentException("trials must be at least 1");
         }
     }
 
-    /** Options with seed 1, one trial and verification on. */
+    /** Options with poset reduction on and the default reading of images. */
+    public HomologyOptions(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching,
+            long seed, int trials, boolean verify) {
+        this(complex, coefficients, reduced, matching, seed, trials, verify, true, ImageOptions.defaults());
+    }
+
+    /** Options with seed 1, one trial, verification and poset reduction on. */
     public HomologyOptions(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching) {
         this(complex, coefficients, reduced, matching, 1L, 1, true);
     }
@@ -44,6 +55,17 @@ public record HomologyOptions(ComplexChoice complex, Coefficients coefficients, 
 
     /** These options with another choice of complex. */
     public HomologyOptions withComplex(ComplexChoice choice) {
-        return new HomologyOptions(choice, coefficients, reduced, matching, seed, trials, verify);
+        return new HomologyOptions(choice, coefficients, reduced, matching, seed, trials, verify, posetReduction, image);
+    }
+
+    /** These options with poset reduction switched on or off. */
+    public HomologyOptions withPosetReduction(boolean on) {
+        return new HomologyOptions(complex, coefficients, reduced, matching, seed, trials, verify, on, image);
+    }
+
+    /** These options with another way of reading images. */
+    public HomologyOptions withImage(ImageOptions imageOptions) {
+        return new HomologyOptions(complex, coefficients, reduced, matching, seed, trials, verify, posetReduction,
+                imageOptions);
     }
 }

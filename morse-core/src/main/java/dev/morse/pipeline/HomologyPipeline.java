@@ -30,12 +30,24 @@ import dev.morse.matching.TrialCount;
 import dev.morse.morse.MorseReduction;
 import java.util.List;
 import java.util.Optional;
+import dev.morse.homology.HomologyGroup;
+import dev.morse.image.CubicalComplex;
+import dev.morse.image.ImageInput;
+import dev.morse.image.LoadedImage;
+import dev.morse.reduction.PosetReduction;
+import dev.morse.reduction.ReductionResult;
+import dev.morse.reduction.ReductionStats;
+import dev.morse.report.ImageFacts;
+import java.util.function.Function;
 
 /**
  * Runs homology on one input: detects the format from the header line, reads it, builds the chain
  * complex (for a poset: the cellular complex when it is a CW poset and the choice allows, else the
- * order complex), reduces it by the chosen acyclic matching and computes homology, returning a
- * {@link HomologyReport} with the time of each phase ({@code read}, {@code complex}, then
+ * order complex, of the poset shrunk by {@link PosetReduction} unless that is switched off; for an
+ * image or volume: the cubical complex of its foreground), reduces it by the chosen acyclic
+ * matching and computes homology, returning a
+ * {@link HomologyReport} with the time of each phase ({@code read}, {@code poset reduction} when
+ * it ran, {@code complex}, then
  * {@code match}, {@code verify}, {@code sweep}, {@code reduce}, {@code homology} as they ran).
  * Stateless.
  */
@@ -45,6 +57,7 @@ public final class HomologyPipeline {
 
     private static final String READ = "read";
     private static final String COMPLEX = "complex";
+    private static final String POSET_REDUCTION = "poset reduction";
     private static final String TRIALS = "trials";
 
     private HomologyPipeline() {
@@ -76,6 +89,9 @@ public final class HomologyPipeline {
      */
     public static HomologyReport run(Path file, HomologyOptions options) throws IOException {
         String source = file.toString();
+        if (isImageInput(List.of(file), options)) {
+            return fromImage(source, List.of(file), options);
+        }
         requireReadable(file);
         long start = System.nanoTime();
         try {
@@ -88,6 +104,7 @@ public final class HomologyPipeline {
                     Facets facets = SimplicialReader.read(file);
                     yield fromFacets(source, facets, options, PhaseTiming.since(READ, start));
                 }
+                case IMAGE, VOLUME -> throw new AssertionError("header detection finds only text formats");
             };
         } catch (NoSuchFileException e) {
             throw new InputException(source, InputException.NO_LINE, "no such file");
@@ -112,7 +129,63 @@ public final class HomologyPipeline {
                 Facets facets = SimplicialReader.parse(text, source);
                 yield fromFacets(source, facets, options, PhaseTiming.since(READ, start));
             }
+            case IMAGE, VOLUME -> throw new AssertionError("header detection finds only text formats");
         };
+    }
+
+    /**
+     * Runs on several files, which must be the slices of one volume, or on one file (see
+     * {@link #run(Path, HomologyOptions)}); the report names the files joined by spaces.
+     *
+     * @throws InputException for bad input
+     * @throws IOException when reading fails for another reason
+     */
+    public static HomologyReport run(List<Path> files, HomologyOptions options) throws IOException {
+        if (files.size() == 1) {
+            return run(files.get(0), options);
+        }
+        StringBuilder source = new StringBuilder();
+        for (Path file : files) {
+            source.append(source.length() > 0 ? " " : "").append(file);
+        }
+        return fromImage(source.toString(), files, options);
+    }
+
+    /** Images are told by their first bytes; a directory is a stack of slices; a raw size means a raw volume. */
+    private static boolean isImageInput(List<Path> files, HomologyOptions options) {
+        Path first = files.get(0);
+        return files.size() > 1 || options.image().rawSize().isPresent() || Files.isDirectory(first)
+                || ImageInput.isImageFile(first);
+    }
+
+    private static HomologyReport fromImage(String source, List<Path> files, HomologyOptions options)
+            throws IOException {
+        if (options.complex() != ComplexChoice.AUTO) {
+            throw new InputException(source, InputException.NO_LINE,
+                    "an image has only its cubical complex; the choice of complex applies to poset files");
+        }
+        long start = System.nanoTime();
+        LoadedImage image = ImageInput.load(files, options.image());
+        PhaseTiming read = PhaseTiming.since(READ, start);
+        long built = System.nanoTime();
+        ChainComplex complex;
+        try {
+            complex = CubicalComplex.of(image.voxels());
+        } catch (IllegalStateException e) {
+            throw tooLarge(source, e);
+        }
+        InputFormat format = image.isVolume() ? InputFormat.VOLUME : InputFormat.IMAGE;
+        return finish(source, format, complex, Optional.empty(), options, read, PhaseTiming.since(COMPLEX, built),
+                -1, Optional.empty(), homology -> Optional.of(imageFacts(image, homology)));
+    }
+
+    private static ImageFacts imageFacts(LoadedImage image, Homology unreduced) {
+        List<Integer> size = new ArrayList<>();
+        for (int extent : image.voxels().sizes()) {
+            size.add(extent);
+        }
+        return new ImageFacts(size, image.slices(), image.voxels().count(), image.threshold(), image.inverted(),
+                unreduced.group(0).betti(), unreduced.group(1).betti(), unreduced.group(2).betti());
     }
 
     private static void requireReadable(Path file) {
@@ -135,8 +208,24 @@ public final class HomologyPipeline {
             throw new InputException(source, InputException.NO_LINE,
                     "the cellular complex needs a CW poset, and this is not one: " + verdict.orElseThrow().reason());
         }
-        ChainComplex complex = cellular ? CellularComplex.of(poset) : orderComplex(source, poset);
-        return finish(source, InputFormat.POSET, complex, verdict, options, read, PhaseTiming.since(COMPLEX, start));
+        if (cellular) {
+            return finish(source, InputFormat.POSET, CellularComplex.of(poset), verdict, options, read,
+                    PhaseTiming.since(COMPLEX, start));
+        }
+        Optional<ReductionStats> reduction = Optional.empty();
+        Poset shrunk = poset;
+        if (options.posetReduction()) {
+            ReductionResult result = PosetReduction.reduce(poset);
+            shrunk = result.poset();
+            reduction = Optional.of(result.stats());
+        }
+        ChainComplex complex = orderComplex(source, shrunk);
+        double reductionMs = reduction.map(ReductionStats::milliseconds).orElse(0.0);
+        PhaseTiming build = PhaseTiming.since(COMPLEX, start);
+        build = new PhaseTiming(COMPLEX, Math.max(0, build.milliseconds() - reductionMs));
+        // the homology is that of Δ(P): listed up to its dimension even where the reduced poset is lower
+        return finish(source, InputFormat.POSET, complex, verdict, options, read, build, poset.maxHeight(), reduction,
+                homology -> Optional.empty());
     }
 
     private static HomologyReport fromFacets(String source, Facets facets, HomologyOptions options, PhaseTiming read) {
@@ -170,10 +259,24 @@ public final class HomologyPipeline {
 
     private static HomologyReport finish(String source, InputFormat format, ChainComplex complex,
             Optional<CwPosetVerdict> verdict, HomologyOptions options, PhaseTiming read, PhaseTiming build) {
+        return finish(source, format, complex, verdict, options, read, build, -1, Optional.empty(),
+                homology -> Optional.empty());
+    }
+
+    /**
+     * @param top the top dimension to list homology groups up to, when higher than the complex's
+     * @param reduction what the poset reduction did, if it ran
+     * @param image the image facts, from the unreduced homology
+     */
+    private static HomologyReport finish(String source, InputFormat format, ChainComplex complex,
+            Optional<CwPosetVerdict> verdict, HomologyOptions options, PhaseTiming read, PhaseTiming build, int top,
+            Optional<ReductionStats> reduction, Function<Homology, Optional<ImageFacts>> image) {
         MatchingHeuristic heuristic = MatchingHeuristics.byName(options.matching()).orElseThrow();
         MorseReduction.Outcome outcome = MorseReduction.run(complex, new MorseReduction.Request(heuristic,
                 new MatchingOptions(options.seed()), options.coefficients(), options.verify()));
-        List<PhaseTiming> timings = new ArrayList<>(List.of(read, build));
+        List<PhaseTiming> timings = new ArrayList<>(List.of(read));
+        reduction.ifPresent(stats -> timings.add(new PhaseTiming(POSET_REDUCTION, stats.milliseconds())));
+        timings.add(build);
         outcome.times().millis().forEach((phase, ms) -> timings.add(new PhaseTiming(phase, ms)));
         List<TrialCount> trials = List.of();
         if (options.trials() > 1) {
@@ -181,9 +284,23 @@ public final class HomologyPipeline {
             trials = MatchingTrials.run(complex, heuristic, options.seed(), options.trials());
             timings.add(PhaseTiming.since(TRIALS, start));
         }
-        Homology homology = options.reduced() ? outcome.homology().toReduced() : outcome.homology();
+        Homology unreduced = padded(outcome.homology(), top);
+        Homology homology = options.reduced() ? unreduced.toReduced() : unreduced;
         return new HomologyReport(source, format, complex.kind(), boxed(outcome.cells()), heuristic.name(),
-                boxed(outcome.critical()), homology, verdict, timings, outcome.rounds(), outcome.lowerBound(), trials);
+                boxed(outcome.critical()), homology, verdict, timings, outcome.rounds(), outcome.lowerBound(), trials,
+                reduction, image.apply(unreduced));
+    }
+
+    /** The homology with trivial groups added up to dimension {@code top}. */
+    private static Homology padded(Homology homology, int top) {
+        if (homology.groups().size() > top) {
+            return homology;
+        }
+        List<HomologyGroup> groups = new ArrayList<>(homology.groups());
+        for (int d = groups.size(); d <= top; d++) {
+            groups.add(HomologyGroup.free(d, 0));
+        }
+        return new Homology(homology.coefficients(), homology.reduced(), groups);
     }
 
     private static List<Integer> boxed(int[] counts) {

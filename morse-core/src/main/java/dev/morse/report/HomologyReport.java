@@ -8,6 +8,7 @@ import dev.morse.io.InputFormat;
 import dev.morse.matching.TrialCount;
 import dev.morse.morse.MorseReduction;
 import dev.morse.morse.ReductionRound;
+import dev.morse.reduction.ReductionStats;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -30,6 +31,9 @@ import java.util.Optional;
  *     unreduced homology (Forman 1998)
  * @param trials the spread of critical-cell vectors over repeated seeded runs of the matching (empty
  *     when only one run was asked for)
+ * @param posetReduction what the homology-preserving reduction of the poset did, when one ran
+ *     (the order complex was then built on the reduced poset)
+ * @param image the image or volume the cubical complex was built from, for image input
  */
 public record HomologyReport(
         String input,
@@ -43,7 +47,9 @@ public record HomologyReport(
         List<PhaseTiming> timings,
         List<ReductionRound> rounds,
         long morseLowerBound,
-        List<TrialCount> trials) {
+        List<TrialCount> trials,
+        Optional<ReductionStats> posetReduction,
+        Optional<ImageFacts> image) {
 
     /** Validates and copies. */
     public HomologyReport {
@@ -53,6 +59,8 @@ public record HomologyReport(
         Objects.requireNonNull(matching, "matching");
         Objects.requireNonNull(homology, "homology");
         Objects.requireNonNull(cwCheck, "cwCheck");
+        Objects.requireNonNull(posetReduction, "posetReduction");
+        Objects.requireNonNull(image, "image");
         cells = List.copyOf(cells);
         critical = List.copyOf(critical);
         timings = List.copyOf(timings);
@@ -69,6 +77,14 @@ public record HomologyReport(
                 throw new IllegalArgumentException("bad cell or critical count in dimension " + d);
             }
         }
+    }
+
+    /** A report of a run on an input that was neither reduced as a poset nor read as an image. */
+    public HomologyReport(String input, InputFormat format, ComplexKind complex, List<Integer> cells, String matching,
+            List<Integer> critical, Homology homology, Optional<CwPosetVerdict> cwCheck, List<PhaseTiming> timings,
+            List<ReductionRound> rounds, long morseLowerBound, List<TrialCount> trials) {
+        this(input, format, complex, cells, matching, critical, homology, cwCheck, timings, rounds, morseLowerBound,
+                trials, Optional.empty(), Optional.empty());
     }
 
     /**

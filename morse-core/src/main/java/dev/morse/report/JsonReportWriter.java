@@ -16,7 +16,10 @@ import java.math.BigInteger;
 import java.math.RoundingMode;
 import dev.morse.matching.TrialCount;
 import dev.morse.morse.ReductionRound;
+import dev.morse.io.InputFormat;
+import dev.morse.reduction.ReductionStats;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * Writes a {@link HomologyReport} as one JSON object with the fields fixed by the design
@@ -25,8 +28,11 @@ import java.util.List;
  * {@code cw_check} ({@code {"cw_poset": bool}}, with {@code "reason": text} when the check gave
  * one, or {@code null} when no check was made), {@code morse_lower_bound} and {@code excess} (critical
  * cells beyond it), {@code rounds} (cells left after each algebraic reduction round), {@code trials}
- * (critical vectors and how often each occurred, when several seeded runs were asked for) and
- * {@code timings_ms} (phase name to milliseconds). Torsion factors are JSON integers of
+ * (critical vectors and how often each occurred, when several seeded runs were asked for),
+ * {@code poset_reduction} (for a poset: what the reduction before the order complex removed, or
+ * {@code null} when none ran), {@code image} (for an image or volume: its size, threshold,
+ * foreground, and components, tunnels and cavities) and {@code timings_ms} (phase name to
+ * milliseconds). Torsion factors are JSON integers of
  * any size. Streams through Jackson's {@link JsonGenerator}; holds nothing.
  */
 public final class JsonReportWriter {
@@ -69,6 +75,12 @@ public final class JsonReportWriter {
                 writeTrials(json, report.trials());
             }
             writeCwCheck(json, report);
+            if (report.format() == InputFormat.POSET) {
+                writePosetReduction(json, report.posetReduction());
+            }
+            if (report.image().isPresent()) {
+                writeImage(json, report.image().get());
+            }
             writeTimings(json, report.timings());
             json.writeEndObject();
         }
@@ -151,6 +163,37 @@ public final class JsonReportWriter {
         if (!verdict.reason().isEmpty()) {
             json.writeStringField("reason", verdict.reason());
         }
+        json.writeEndObject();
+    }
+
+    private static void writePosetReduction(JsonGenerator json, Optional<ReductionStats> stats) throws IOException {
+        json.writeFieldName("poset_reduction");
+        if (stats.isEmpty()) {
+            json.writeNull();
+            return;
+        }
+        ReductionStats s = stats.get();
+        json.writeStartObject();
+        json.writeNumberField("beat_points_removed", s.beatPointsRemoved());
+        json.writeNumberField("acyclic_links_removed", s.acyclicLinksRemoved());
+        json.writeNumberField("links_skipped", s.linksSkipped());
+        json.writeNumberField("elements_before", s.elementsBefore());
+        json.writeNumberField("elements_after", s.elementsAfter());
+        json.writeFieldName("ms");
+        json.writeNumber(BigDecimal.valueOf(s.milliseconds()).setScale(TIMING_DECIMALS, RoundingMode.HALF_UP));
+        json.writeEndObject();
+    }
+
+    private static void writeImage(JsonGenerator json, ImageFacts image) throws IOException {
+        json.writeObjectFieldStart("image");
+        writeIntArray(json, "size", image.size());
+        json.writeNumberField("slices", image.slices());
+        json.writeNumberField("foreground", image.foreground());
+        json.writeNumberField("threshold", image.threshold());
+        json.writeBooleanField("inverted", image.inverted());
+        json.writeNumberField("components", image.components());
+        json.writeNumberField("tunnels", image.tunnels());
+        json.writeNumberField("cavities", image.cavities());
         json.writeEndObject();
     }
 

@@ -83,6 +83,11 @@ final class HasseWorkspace {
         return maximal;
     }
 
+    /** The height of x in the original poset: it still increases along every cover. */
+    int height(int x) {
+        return height[x];
+    }
+
     int lowerCount(int x) {
         return lower.size(x);
     }

@@ -101,6 +101,25 @@ class PosetReductionTest {
     }
 
     @Test
+    void eulerCharacteristicZeroIsNotEnough() {
+        // below x and y lie a four-point circle and a point: reduced Euler characteristic
+        // 1 - 1 = 0, yet H~_0 = H~_1 = Z, so the link is not acyclic and x, y must stay; nothing
+        // else has an acyclic link or is a beat point either
+        Poset p = PosetReader.parse("""
+                morse-poset 1
+                a
+                b
+                e
+                c: a b
+                d: a b
+                x: c d e
+                y: c d e
+                """, "circle-and-point");
+        ReductionResult r = PosetReduction.reduce(p);
+        assertEquals(0, r.stats().removed(), r.stats().toString());
+    }
+
+    @Test
     void properPartsOfGeometricLatticesDoNotShrink() {
         // Rota 1964: on every interval of a geometric lattice the Möbius function is nonzero, so by
         // Philip Hall's theorem no link has reduced Euler characteristic 0, hence none is acyclic;

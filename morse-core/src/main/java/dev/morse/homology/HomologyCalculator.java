@@ -1,6 +1,7 @@
 package dev.morse.homology;
 
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
@@ -23,7 +24,13 @@ public final class HomologyCalculator {
         for (int d = 0; d <= top + 1; d++) {
             torsionBelow.add(List.of());
         }
+        Progress progress = Progress.current();
+        progress.begin("homology", "columns", complex.cellCount() - complex.cellCount(0));
+        long columnsDone = 0;
         for (int d = 1; d <= top; d++) {
+            // the Smith normal form may report its own steps; the count is set right after each matrix
+            progress.reached(columnsDone);
+            columnsDone += complex.cellCount(d);
             SparseIntegerMatrix boundary = SparseIntegerMatrix.boundaryOf(complex, d);
             if (coefficients.hasTorsion() || coefficients.ring() == Coefficients.Ring.RATIONALS) {
                 SmithForm form = SmithNormalForm.compute(boundary);

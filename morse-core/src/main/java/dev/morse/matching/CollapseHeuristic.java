@@ -2,6 +2,7 @@ package dev.morse.matching;
 
 import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayFIFOQueue;
 import java.util.Arrays;
 
@@ -40,6 +41,8 @@ public final class CollapseHeuristic implements MatchingHeuristic {
             }
         }
         int next = n - 1;
+        Progress progress = Progress.current();
+        int pairs = 0;
         while (true) {
             while (!queue.isEmpty()) {
                 int t = queue.dequeueInt();
@@ -54,6 +57,9 @@ public final class CollapseHeuristic implements MatchingHeuristic {
                     mates[t] = s;
                     remove(s, removed, cofacesLeft, boundary, queue);
                     remove(t, removed, cofacesLeft, boundary, queue);
+                    if ((++pairs & 0x7FF) == 0) {
+                        progress.reached(2L * pairs);
+                    }
                 }
             }
             while (next >= 0 && removed[next]) {

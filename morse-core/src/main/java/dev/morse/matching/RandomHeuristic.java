@@ -2,6 +2,7 @@ package dev.morse.matching;
 
 import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import java.util.Arrays;
 import java.util.SplittableRandom;
@@ -41,7 +42,12 @@ public final class RandomHeuristic implements MatchingHeuristic {
         int[] shuffled = shuffledByDimension(complex, random);
         int next = n - 1;
         int left = n;
+        Progress progress = Progress.current();
+        int steps = 0;
         while (left > 0) {
+            if ((++steps & 0xFFF) == 0) {
+                progress.reached(n - left);
+            }
             if (!freeFaces.isEmpty()) {
                 int pick = random.nextInt(freeFaces.size());
                 int t = freeFaces.getInt(pick);

@@ -7,6 +7,7 @@ import dev.morse.homology.ModularRank;
 import dev.morse.homology.SmithForm;
 import dev.morse.homology.SmithNormalForm;
 import dev.morse.homology.SparseIntegerMatrix;
+import dev.morse.progress.Progress;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
@@ -23,7 +24,13 @@ final class MatrixHomology {
         for (int d = 0; d <= top + 1; d++) {
             torsion.add(List.of());
         }
+        Progress progress = Progress.current();
+        progress.begin("homology", "columns", complex.totalCells() - complex.cellCount(0));
+        long columnsDone = 0;
         for (int d = 1; d <= top; d++) {
+            // the Smith normal form may report its own steps; the count is set right after each matrix
+            progress.reached(columnsDone);
+            columnsDone += complex.cellCount(d);
             SparseIntegerMatrix m = complex.boundary(d);
             if (coefficients.ring() == Coefficients.Ring.PRIME_FIELD) {
                 rank[d] = ModularRank.rank(m, coefficients.prime());

@@ -22,6 +22,12 @@ public final class RandomHeuristic implements MatchingHeuristic {
         return "random";
     }
 
+    /** Each seed gives its own run. */
+    @Override
+    public boolean randomized() {
+        return true;
+    }
+
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
         SplittableRandom random = new SplittableRandom(options.seed());

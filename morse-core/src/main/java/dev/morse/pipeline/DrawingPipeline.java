@@ -74,8 +74,10 @@ public final class DrawingPipeline {
             throw new InputException(source, InputException.NO_LINE,
                     "the cellular complex needs a CW poset, and this is not one: " + verdict.reason());
         }
-        return HasseDrawing.ofPoset(poset, source + ": Hasse diagram; not a CW poset (" + verdict.reason()
-                + "), so its matching lives on the order complex and nothing is marked here");
+        return HasseDrawing.ofPoset(poset, source + ": Hasse diagram of a poset that is not a CW poset; nothing marked",
+                "Not a CW poset: " + verdict.reason() + ". Its matching is made on the order complex, whose cells are"
+                        + " chains, not elements, so no pair of elements here is matched; the order complex can be drawn"
+                        + " instead.");
     }
 
     private static HasseDrawing marked(String source, ChainComplex complex, String what, DrawOptions options) {

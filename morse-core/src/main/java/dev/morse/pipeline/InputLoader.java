@@ -12,6 +12,7 @@ import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.Optional;
 
 /**
  * Reads an input file of either format and builds its chain complex, turning every problem with
@@ -78,8 +79,7 @@ public final class InputLoader {
                     throw new InputException(input.source(), InputException.NO_LINE,
                             "a simplicial file has only its own complex; the choice of complex applies to poset files");
                 }
-                SimplicialComplex complex = SimplicialComplex.of(input.facets());
-                return new BuiltComplex(complex, java.util.Optional.empty(), millisSince(start));
+                return new BuiltComplex(simplicialComplex(input), Optional.empty(), millisSince(start));
             }
             ComplexSelector.Selection selection = ComplexSelector.selectWithVerdict(input.poset(), choice);
             if (selection.complex() == null) {
@@ -90,6 +90,22 @@ public final class InputLoader {
             return new BuiltComplex(selection.complex(), selection.verdict(), millisSince(start));
         } catch (IllegalStateException e) {
             // the complexes refuse to build past their cell limits with this exception, before allocating
+            throw new InputException(input.source(), InputException.NO_LINE, "too large to compute: " + e.getMessage());
+        }
+    }
+
+    /**
+     * The simplicial complex of a simplicial input.
+     *
+     * @throws InputException when it has more faces than a complex can hold
+     */
+    public static SimplicialComplex simplicialComplex(LoadedInput input) {
+        if (input.format() != InputFormat.SIMPLICIAL) {
+            throw new IllegalArgumentException("not a simplicial input: " + input.source());
+        }
+        try {
+            return SimplicialComplex.of(input.facets());
+        } catch (IllegalStateException e) {
             throw new InputException(input.source(), InputException.NO_LINE, "too large to compute: " + e.getMessage());
         }
     }

@@ -21,6 +21,7 @@ public final class ComparisonChartSvg {
     private static final double PLOT_HEIGHT = 260;
     private static final double LEGEND_ROW = 18;
     private static final int TICKS = 5;
+    private static final double TITLE_CHAR_WIDTH = 7.2;
 
     private ComparisonChartSvg() {
     }
@@ -34,7 +35,9 @@ public final class ComparisonChartSvg {
         double plotWidth = Math.max(240, dimensions * (groupWidth + GROUP_GAP) + GROUP_GAP);
         double legendTop = TOP + PLOT_HEIGHT + 48;
         double height = legendTop + runs.size() * LEGEND_ROW + 16;
-        double width = LEFT + plotWidth + RIGHT;
+        String title = "Critical cells per dimension, " + report.input() + " (" + report.complex().reportName()
+                + " complex, " + report.totalCells() + " cells)";
+        double width = Math.max(LEFT + plotWidth + RIGHT, LEFT + title.length() * TITLE_CHAR_WIDTH + RIGHT);
         long largest = 1;
         for (MatchingRun run : runs) {
             for (int c : run.critical()) {
@@ -48,8 +51,7 @@ public final class ComparisonChartSvg {
         long top = ((largest + step - 1) / step) * step;
         Svg svg = new Svg(width, height);
         svg.text("title", "critical cells per dimension: " + report.input());
-        svg.text("text", "Critical cells per dimension, " + report.input() + " (" + report.complex().reportName()
-                + " complex, " + report.totalCells() + " cells)", "x", Svg.number(LEFT), "y", "24", "font-size", "15");
+        svg.text("text", title, "x", Svg.number(LEFT), "y", "24", "font-size", "15");
         svg.text("text", "dashed: Morse lower bound of the dimension, total " + report.morseLowerBound(),
                 "x", Svg.number(LEFT), "y", "42", "font-size", "11", "fill", "#555");
         double baseline = TOP + PLOT_HEIGHT;

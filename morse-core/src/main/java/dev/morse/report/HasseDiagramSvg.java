@@ -21,6 +21,7 @@ public final class HasseDiagramSvg {
     private static final double MAX_SPACING = 140;
     private static final double CHAR_WIDTH = 6.2;
     private static final int SWEEPS = 6;
+    private static final int NOTE_LINE = 100;
     private static final String MATCHED_COLOUR = "#d62728";
     private static final String CRITICAL_COLOUR = "#1f77b4";
 
@@ -41,14 +42,20 @@ public final class HasseDiagramSvg {
             longestLabel = Math.max(longestLabel, drawing.label(v).length());
         }
         double spacing = Math.min(MAX_SPACING, Math.max(MIN_SPACING, longestLabel * CHAR_WIDTH + 16));
-        double width = 2 * MARGIN + widest * spacing;
-        double legendHeight = 56;
+        List<String> note = wrap(drawing.note(), NOTE_LINE);
+        // the caption is one line of 13-pixel text across the top, the note lines of 11-pixel text
+        double width = Math.max(2 * MARGIN + widest * spacing, MARGIN + drawing.caption().length() * 7.0);
+        for (String line : note) {
+            width = Math.max(width, MARGIN + line.length() * 6.0);
+        }
+        double legendY = 38 + note.size() * 14;
+        double legendHeight = legendY + 18;
         double height = 2 * MARGIN + Math.max(0, top) * ROW + legendHeight;
         double[] x = new double[n];
         double[] y = new double[n];
         for (int level = 0; level <= top; level++) {
             List<Integer> row = rows.get(level);
-            double start = MARGIN + (widest - row.size()) * spacing / 2 + spacing / 2;
+            double start = (width - row.size() * spacing) / 2 + spacing / 2;
             for (int k = 0; k < row.size(); k++) {
                 int v = row.get(k);
                 x[v] = start + k * spacing;
@@ -58,7 +65,11 @@ public final class HasseDiagramSvg {
         Svg svg = new Svg(width, height);
         svg.text("title", drawing.caption());
         svg.text("text", drawing.caption(), "x", Svg.number(MARGIN / 2), "y", "20", "font-size", "13");
-        legend(svg, drawing);
+        for (int i = 0; i < note.size(); i++) {
+            svg.text("text", note.get(i), "x", Svg.number(MARGIN / 2), "y", Svg.number(36 + 14 * i), "font-size", "11",
+                    "fill", "#555");
+        }
+        legend(svg, drawing, legendY);
         for (int e = 0; e < drawing.coverCount(); e++) {
             int lo = drawing.lowerEnd(e);
             int up = drawing.upperEnd(e);
@@ -81,20 +92,38 @@ public final class HasseDiagramSvg {
         return svg.finish();
     }
 
-    private static void legend(Svg svg, HasseDrawing drawing) {
+    private static void legend(Svg svg, HasseDrawing drawing, double y) {
         if (!drawing.marked()) {
-            svg.text("text", "nothing marked: no matching is drawn on these elements", "x", Svg.number(MARGIN / 2),
-                    "y", "38", "font-size", "11", "fill", "#555");
             return;
         }
-        svg.empty("rect", "class", "key", "x", Svg.number(MARGIN / 2), "y", "31", "width", "18", "height", "4",
-                "fill", MATCHED_COLOUR);
-        svg.text("text", drawing.matchedCount() + " matched pairs", "x", Svg.number(MARGIN / 2 + 24), "y", "37",
+        svg.empty("rect", "class", "key", "x", Svg.number(MARGIN / 2), "y", Svg.number(y - 6), "width", "18",
+                "height", "4", "fill", MATCHED_COLOUR);
+        svg.text("text", drawing.matchedCount() + " matched pairs", "x", Svg.number(MARGIN / 2 + 24), "y", Svg.number(y),
                 "font-size", "11");
-        svg.empty("rect", "class", "key", "x", Svg.number(MARGIN / 2 + 150), "y", "28", "width", "10", "height", "10",
-                "fill", CRITICAL_COLOUR);
-        svg.text("text", drawing.criticalCount() + " critical cells", "x", Svg.number(MARGIN / 2 + 166), "y", "37",
-                "font-size", "11");
+        svg.empty("rect", "class", "key", "x", Svg.number(MARGIN / 2 + 150), "y", Svg.number(y - 9), "width", "10",
+                "height", "10", "fill", CRITICAL_COLOUR);
+        svg.text("text", drawing.criticalCount() + " critical cells", "x", Svg.number(MARGIN / 2 + 166),
+                "y", Svg.number(y), "font-size", "11");
+    }
+
+    /** Splits text at spaces into lines of at most about {@code width} characters. */
+    static List<String> wrap(String text, int width) {
+        List<String> lines = new ArrayList<>();
+        StringBuilder line = new StringBuilder();
+        for (String word : text.split(" ")) {
+            if (word.isEmpty()) {
+                continue;
+            }
+            if (line.length() > 0 && line.length() + 1 + word.length() > width) {
+                lines.add(line.toString());
+                line.setLength(0);
+            }
+            line.append(line.length() > 0 ? " " : "").append(word);
+        }
+        if (line.length() > 0) {
+            lines.add(line.toString());
+        }
+        return lines;
     }
 
     /** The nodes of each level, in the order to draw them left to right. */

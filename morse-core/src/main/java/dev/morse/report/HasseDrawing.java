@@ -28,9 +28,10 @@ public final class HasseDrawing {
     private final boolean[] matched;
     private final boolean[] critical;
     private final String caption;
+    private final String note;
 
     private HasseDrawing(List<String> labels, int[] levels, int[] lower, int[] upper, boolean[] matched,
-            boolean[] critical, String caption) {
+            boolean[] critical, String caption, String note) {
         if (labels.size() > MAX_NODES) {
             throw new IllegalArgumentException(labels.size() + " nodes are more than a picture takes (" + MAX_NODES + ")");
         }
@@ -41,10 +42,16 @@ public final class HasseDrawing {
         this.matched = matched;
         this.critical = critical;
         this.caption = Objects.requireNonNull(caption, "caption");
+        this.note = Objects.requireNonNull(note, "note");
     }
 
-    /** The Hasse diagram of {@code poset} by height, with nothing marked. */
-    public static HasseDrawing ofPoset(Poset poset, String caption) {
+    /**
+     * The Hasse diagram of {@code poset} by height, with nothing marked.
+     *
+     * @param caption one short line saying what is shown
+     * @param note more words on it, possibly long; empty for none
+     */
+    public static HasseDrawing ofPoset(Poset poset, String caption, String note) {
         int n = poset.size();
         String[] labels = new String[n];
         int[] levels = new int[n];
@@ -63,7 +70,7 @@ public final class HasseDrawing {
                 e++;
             }
         }
-        return new HasseDrawing(Arrays.asList(labels), levels, lo, up, null, null, caption);
+        return new HasseDrawing(Arrays.asList(labels), levels, lo, up, null, null, caption, note);
     }
 
     /**
@@ -100,7 +107,7 @@ public final class HasseDrawing {
             matched[e] = matching.mate(lo.getInt(e)) == up.getInt(e);
         }
         return new HasseDrawing(Arrays.asList(labels), levels, lo.toIntArray(), up.toIntArray(), matched, critical,
-                caption);
+                caption, "");
     }
 
     /** Number of nodes. */
@@ -169,6 +176,11 @@ public final class HasseDrawing {
     /** One line saying what the picture shows. */
     public String caption() {
         return caption;
+    }
+
+    /** Further words on what is shown, or empty. */
+    public String note() {
+        return note;
     }
 
     /** The top level, -1 without nodes. */

@@ -39,8 +39,8 @@ public final class InspectionTextWriter {
                         + " of the order complex");
         row(text, "euler", "Euler characteristic " + s.eulerCharacteristic() + ", reduced "
                 + s.reducedEulerCharacteristic());
-        row(text, "mobius", s.mobius() + " = mu(bottom, top) with a bottom and a top adjoined;"
-                + " equals the reduced Euler characteristic, as Philip Hall's theorem says");
+        row(text, "mobius", s.mobius() + " from bottom to top, once both are adjoined;"
+                + " equal to the reduced Euler characteristic (Philip Hall)");
         return text.toString();
     }
 

@@ -49,7 +49,8 @@ class DrawingPipelineTest {
         assertEquals(1, d.coverCount());
         assertFalse(d.marked());
         assertEquals(0, d.matchedCount());
-        assertTrue(d.caption().contains("not a CW poset"), d.caption());
+        assertEquals("loop.poset: Hasse diagram of a poset that is not a CW poset; nothing marked", d.caption());
+        assertTrue(d.note().startsWith("Not a CW poset: 'e' has height 1 but covers only 'v'"), d.note());
     }
 
     @Test

@@ -47,7 +47,7 @@ class SvgPicturesTest {
     void labelsThatNeedEscapingStillMakeWellFormedXml() throws Exception {
         // labels may hold any character but white space, ':' and '#'
         Poset p = PosetReader.parse("morse-poset 1\na&b\n<c>: a&b\n\"d'\": a&b\n", "odd.poset");
-        Document doc = parse(HasseDiagramSvg.toSvg(HasseDrawing.ofPoset(p, "odd & <labels>")));
+        Document doc = parse(HasseDiagramSvg.toSvg(HasseDrawing.ofPoset(p, "odd & <labels>", "a note \"quoted\" & <escaped>")));
         assertEquals(3, count(doc, "circle", null));
         assertEquals(2, count(doc, "line", "cover"));
         NodeList texts = doc.getElementsByTagNameNS("http://www.w3.org/2000/svg", "text");

@@ -4,6 +4,7 @@ import dev.morse.complex.ComplexChoice;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.pipeline.DrawOptions;
 import dev.morse.pipeline.DrawingPipeline;
+import dev.morse.report.Counted;
 import dev.morse.report.HasseDiagramSvg;
 import dev.morse.report.HasseDrawing;
 import java.io.PrintWriter;
@@ -71,8 +72,8 @@ final class DrawCommand implements Callable<Integer> {
         } else {
             OutputFiles.write(output, svg);
             out.println("wrote " + output + ": " + drawing.nodeCount() + " nodes, " + drawing.coverCount() + " covers"
-                    + (drawing.marked() ? ", " + drawing.matchedCount() + " matched pairs, " + drawing.criticalCount()
-                            + " critical" : ", nothing marked"));
+                    + (drawing.marked() ? ", " + Counted.of(drawing.matchedCount(), "matched pair") + ", "
+                            + drawing.criticalCount() + " critical" : ", nothing marked"));
             out.println(drawing.caption());
             if (!drawing.note().isEmpty()) {
                 out.println(drawing.note());

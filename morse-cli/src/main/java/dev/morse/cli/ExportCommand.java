@@ -5,6 +5,7 @@ import dev.morse.matching.MatchingHeuristics;
 import dev.morse.morse.MorseComplex;
 import dev.morse.pipeline.ExportOptions;
 import dev.morse.pipeline.MorseComplexExport;
+import dev.morse.report.Counted;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
@@ -76,9 +77,9 @@ final class ExportCommand implements Callable<Integer> {
             files.put(MorseComplexExport.cellsFileName(d), export.cellsText(d));
             int rows = d == 0 ? 0 : morse.boundary(d).rows();
             int entries = d == 0 ? 0 : morse.boundary(d).nonZeros();
-            summary.append(String.format(Locale.ROOT, "  %-16s %d x %d, %d nonzero entries; %s: %d cells\n",
-                    MorseComplexExport.matrixFileName(d), rows, morse.cellCount(d), entries,
-                    MorseComplexExport.cellsFileName(d), morse.cellCount(d)));
+            summary.append(String.format(Locale.ROOT, "  %-16s %d x %d, %s; %s: %s\n",
+                    MorseComplexExport.matrixFileName(d), rows, morse.cellCount(d), Counted.of(entries, "nonzero entry", "nonzero entries"),
+                    MorseComplexExport.cellsFileName(d), Counted.of(morse.cellCount(d), "critical cell")));
         }
         OutputFiles.writeAll(directory, files);
         PrintWriter out = spec.commandLine().getOut();

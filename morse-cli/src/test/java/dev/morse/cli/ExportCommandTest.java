@@ -106,9 +106,9 @@ class ExportCommandTest {
         assertEquals(0, run.code(), run.err());
         // coreduction is perfect on the disk: one critical vertex and nothing else
         assertEquals("wrote the Morse complex of " + file + " (cellular complex, matching coreduction) to " + out + "\n"
-                + "  boundary-0.mtx   0 x 1, 0 nonzero entries; critical-0.txt: 1 cells\n"
-                + "  boundary-1.mtx   1 x 0, 0 nonzero entries; critical-1.txt: 0 cells\n"
-                + "  boundary-2.mtx   0 x 0, 0 nonzero entries; critical-2.txt: 0 cells\n", run.out());
+                + "  boundary-0.mtx   0 x 1, 0 nonzero entries; critical-0.txt: 1 critical cell\n"
+                + "  boundary-1.mtx   1 x 0, 0 nonzero entries; critical-1.txt: 0 critical cells\n"
+                + "  boundary-2.mtx   0 x 0, 0 nonzero entries; critical-2.txt: 0 critical cells\n", run.out());
         assertEquals(List.of("a"), Files.readAllLines(out.resolve("critical-0.txt")));
     }
 

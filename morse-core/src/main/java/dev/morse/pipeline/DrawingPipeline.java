@@ -16,6 +16,7 @@ import dev.morse.matching.MatchingOptions;
 import dev.morse.matching.MatchingVerdict;
 import dev.morse.matching.MatchingVerifier;
 import dev.morse.poset.Poset;
+import dev.morse.report.Counted;
 import dev.morse.report.HasseDrawing;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -93,7 +94,7 @@ public final class DrawingPipeline {
             critical += m;
         }
         return HasseDrawing.ofComplex(complex, matching, source + ": " + what + "; matching " + heuristic.name() + ", "
-                + matching.pairCount() + " pairs, " + critical + " critical");
+                + Counted.of(matching.pairCount(), "pair") + ", " + critical + " critical");
     }
 
     /** Builds a complex with a cell limit; the complexes signal going past it by IllegalStateException. */

@@ -101,8 +101,11 @@ public record MorseComplexExport(String source, ComplexKind complexKind, String 
         List<String> comments = List.of(
                 "boundary d_" + d + " of the Morse complex of " + source + " (" + complexKind.reportName()
                         + " complex, matching " + matching + ")",
-                "rows: critical cells of dimension " + (d - 1) + ", columns: critical cells of dimension " + d
-                        + ", as listed in " + (d > 0 ? cellsFileName(d - 1) + " and " : "") + cellsFileName(d));
+                d == 0
+                        ? "no rows (a vertex has no boundary), columns: critical cells of dimension 0, as listed in "
+                                + cellsFileName(0)
+                        : "rows: critical cells of dimension " + (d - 1) + ", columns: critical cells of dimension " + d
+                                + ", as listed in " + cellsFileName(d - 1) + " and " + cellsFileName(d));
         return MatrixMarketWriter.toText(d == 0 ? zeroBoundary() : morse.boundary(d), comments);
     }
 

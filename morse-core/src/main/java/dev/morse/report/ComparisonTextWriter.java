@@ -39,8 +39,9 @@ public final class ComparisonTextWriter {
                 text.append(String.format(Locale.ROOT, "\n  %s, %d trials with seeds %d..%d:\n", run.matching(),
                         run.trialCount(), report.seed(), report.seed() + run.trialCount() - 1));
                 for (TrialCount t : run.trials()) {
-                    text.append(String.format(Locale.ROOT, "    critical %-16s total %-8d %d times\n",
-                            spaced(t.critical()), t.critical().stream().mapToLong(Integer::longValue).sum(), t.count()));
+                    text.append(String.format(Locale.ROOT, "    critical %-16s total %-8d %s\n",
+                            spaced(t.critical()), t.critical().stream().mapToLong(Integer::longValue).sum(),
+                            t.count() == 1 ? "once" : t.count() + " times"));
                 }
             }
         }

@@ -98,11 +98,11 @@ public final class HasseDiagramSvg {
         }
         svg.empty("rect", "class", "key", "x", Svg.number(MARGIN / 2), "y", Svg.number(y - 6), "width", "18",
                 "height", "4", "fill", MATCHED_COLOUR);
-        svg.text("text", drawing.matchedCount() + " matched pairs", "x", Svg.number(MARGIN / 2 + 24), "y", Svg.number(y),
+        svg.text("text", Counted.of(drawing.matchedCount(), "matched pair"), "x", Svg.number(MARGIN / 2 + 24), "y", Svg.number(y),
                 "font-size", "11");
         svg.empty("rect", "class", "key", "x", Svg.number(MARGIN / 2 + 150), "y", Svg.number(y - 9), "width", "10",
                 "height", "10", "fill", CRITICAL_COLOUR);
-        svg.text("text", drawing.criticalCount() + " critical cells", "x", Svg.number(MARGIN / 2 + 166),
+        svg.text("text", Counted.of(drawing.criticalCount(), "critical cell"), "x", Svg.number(MARGIN / 2 + 166),
                 "y", Svg.number(y), "font-size", "11");
     }
 

@@ -8,11 +8,11 @@ import dev.morse.pipeline.HomologyPipeline;
 import dev.morse.report.HomologyReport;
 import dev.morse.report.JsonReportWriter;
 import dev.morse.report.TextReportWriter;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -68,6 +68,9 @@ final class HomologyCommand implements Callable<Integer> {
     @Option(names = "--no-verify", description = "Trust the matching without checking that it is acyclic.")
     private boolean noVerify;
 
+    @Mixin
+    private ProgressOption progress;
+
     // read by Failures through the parse result, which is where it matters
     @Option(names = "--debug", description = "Show stack traces of failures.")
     private boolean debug;
@@ -76,9 +79,9 @@ final class HomologyCommand implements Callable<Integer> {
     private boolean help;
 
     @Override
-    public Integer call() throws IOException {
-        HomologyReport report = HomologyPipeline.run(file,
-                new HomologyOptions(complex, coefficients, reduced, matching, seed, trials, !noVerify));
+    public Integer call() throws Exception {
+        HomologyOptions options = new HomologyOptions(complex, coefficients, reduced, matching, seed, trials, !noVerify);
+        HomologyReport report = progress.around(spec, () -> HomologyPipeline.run(file, options));
         String text = json ? JsonReportWriter.toJson(report) : TextReportWriter.toText(report);
         PrintWriter out = spec.commandLine().getOut();
         out.print(text);

@@ -37,7 +37,7 @@ import org.junit.jupiter.api.TestFactory;
  */
 class CorpusHomologyTest {
     /** Largest complex given to the full Smith normal form on every cell. */
-    private static final long FULL_SNF_LIMIT = 60_000;
+    private static final long FULL_SNF_LIMIT = Long.getLong("morse.test.fullLimit", 60_000);
     /** Largest order complex built for the heuristics. */
     private static final long ORDER_LIMIT = 250_000;
 

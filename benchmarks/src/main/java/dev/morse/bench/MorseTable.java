@@ -13,9 +13,6 @@ import dev.morse.morse.MorseReduction;
 import dev.morse.poset.Poset;
 import java.io.BufferedWriter;
 import java.io.IOException;
-import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -61,7 +58,7 @@ public final class MorseTable {
 
     private static void run(VoxelBlock block, Path file, MatchingHeuristic heuristic) throws IOException {
         System.gc();
-        resetPeaks();
+        HeapPeaks.reset();
         long t0 = System.nanoTime();
         Poset poset = PosetReader.read(file);
         long t1 = System.nanoTime();
@@ -70,7 +67,7 @@ public final class MorseTable {
         MorseReduction.Outcome outcome = MorseReduction.run(complex,
                 new MorseReduction.Request(heuristic, MatchingOptions.DEFAULT, Coefficients.INTEGERS, true));
         long t3 = System.nanoTime();
-        long peak = peakHeapBytes();
+        long peak = HeapPeaks.bytes();
         if (!outcome.homology().groups().equals(block.expectedHomology())) {
             throw new AssertionError("wrong homology " + outcome.homology() + " for " + block.expectedHomology());
         }
@@ -91,24 +88,5 @@ public final class MorseTable {
         StringBuilder s = new StringBuilder();
         phases.forEach((name, ms) -> s.append(s.length() == 0 ? "" : " / ").append(String.format(java.util.Locale.ROOT, "%.0f", ms)));
         return s.toString();
-    }
-
-    private static void resetPeaks() {
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                pool.resetPeakUsage();
-            }
-        }
-    }
-
-    /** Sum of the heap pools' peaks since the reset: an upper bound on the live peak. */
-    private static long peakHeapBytes() {
-        long sum = 0;
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                sum += pool.getPeakUsage().getUsed();
-            }
-        }
-        return sum;
     }
 }

@@ -1,12 +1,10 @@
 package dev.morse.bench;
 
+import dev.morse.generate.VoxelBlock;
 import dev.morse.io.PosetReader;
 import dev.morse.poset.Poset;
 import java.io.BufferedWriter;
 import java.io.IOException;
-import java.lang.management.ManagementFactory;
-import java.lang.management.MemoryPoolMXBean;
-import java.lang.management.MemoryType;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -27,14 +25,14 @@ public final class ParseTable {
             Path file = Files.createTempFile("morse-grid-" + side + "-", ".poset");
             try {
                 try (BufferedWriter out = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
-                    CubicalGridText.write(side, out);
+                    VoxelBlock.of(side, 0, 0).write(out);
                 }
                 System.gc();
-                resetPeaks();
+                HeapPeaks.reset();
                 long start = System.nanoTime();
                 Poset poset = PosetReader.read(file);
                 long millis = (System.nanoTime() - start) / 1_000_000;
-                long peak = peakHeapBytes();
+                long peak = HeapPeaks.bytes();
                 System.gc();
                 Runtime rt = Runtime.getRuntime();
                 long retained = rt.totalMemory() - rt.freeMemory();
@@ -47,24 +45,5 @@ public final class ParseTable {
                 Files.deleteIfExists(file);
             }
         }
-    }
-
-    private static void resetPeaks() {
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                pool.resetPeakUsage();
-            }
-        }
-    }
-
-    /** Sum of the heap pools' peaks: an upper bound on the live peak, as GC timing blurs it. */
-    private static long peakHeapBytes() {
-        long sum = 0;
-        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
-            if (pool.getType() == MemoryType.HEAP) {
-                sum += pool.getPeakUsage().getUsed();
-            }
-        }
-        return sum;
     }
 }

@@ -1,5 +1,6 @@
 package dev.morse.bench;
 
+import dev.morse.generate.VoxelBlock;
 import dev.morse.io.PosetReader;
 import dev.morse.poset.Poset;
 import java.io.BufferedWriter;
@@ -44,7 +45,7 @@ public class PosetParseBenchmark {
     public void writeInput() throws IOException {
         file = Files.createTempFile("morse-grid-" + side + "-", ".poset");
         try (BufferedWriter out = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
-            CubicalGridText.write(side, out);
+            VoxelBlock.of(side, 0, 0).write(out);
         }
     }
 

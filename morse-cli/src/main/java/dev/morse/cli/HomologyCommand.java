@@ -8,7 +8,6 @@ import dev.morse.pipeline.HomologyPipeline;
 import dev.morse.report.HomologyReport;
 import dev.morse.report.JsonReportWriter;
 import dev.morse.report.TextReportWriter;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
@@ -19,6 +18,7 @@ import dev.morse.image.VolumeSize;
 import picocli.CommandLine.ParameterException;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -96,6 +96,9 @@ final class HomologyCommand implements Callable<Integer> {
             description = "Read FILE as a raw volume of unsigned bytes with these sizes, x varying fastest.")
     private VolumeSize dims;
 
+    @Mixin
+    private ProgressOption progress;
+
     // read by Failures through the parse result, which is where it matters
     @Option(names = "--debug", description = "Show stack traces of failures.")
     private boolean debug;
@@ -104,14 +107,15 @@ final class HomologyCommand implements Callable<Integer> {
     private boolean help;
 
     @Override
-    public Integer call() throws IOException {
+    public Integer call() throws Exception {
         if (threshold != null && threshold < 0) {
             throw new ParameterException(spec.commandLine(), "the threshold must not be negative, not " + threshold);
         }
         ImageOptions image = new ImageOptions(threshold == null ? OptionalInt.empty() : OptionalInt.of(threshold),
                 invert, Optional.ofNullable(dims));
-        HomologyReport report = HomologyPipeline.run(files, new HomologyOptions(complex, coefficients, reduced,
-                matching, seed, trials, !noVerify, !noPosetReduction, image));
+        HomologyOptions options = new HomologyOptions(complex, coefficients, reduced, matching, seed, trials,
+                !noVerify, !noPosetReduction, image);
+        HomologyReport report = progress.around(spec, () -> HomologyPipeline.run(files, options));
         String text = json ? JsonReportWriter.toJson(report) : TextReportWriter.toText(report);
         PrintWriter out = spec.commandLine().getOut();
         out.print(text);

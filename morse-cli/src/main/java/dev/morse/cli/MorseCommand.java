@@ -16,6 +16,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "morse",
         description = "Exact homology of posets (order complexes), CW posets (cellular complexes) and simplicial complexes.",
         subcommands = {HomologyCommand.class, DemoCommand.class,
+            InspectCommand.class, CompareCommand.class, DrawCommand.class, ExportCommand.class,
             GenerateCommand.class, OperationCommand.class,
             CommandLine.HelpCommand.class},
         footer = "%nExit codes: 0 success, 2 bad input or options, 1 internal failure.")

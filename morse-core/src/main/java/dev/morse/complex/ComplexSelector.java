@@ -1,6 +1,8 @@
 package dev.morse.complex;
 
 import dev.morse.poset.Poset;
+import java.util.Optional;
+import java.util.function.UnaryOperator;
 
 /**
  * Builds the chain complex of a poset that a {@link ComplexChoice} asks for. Either complex has
@@ -19,15 +21,36 @@ public final class ComplexSelector {
      * @throws IllegalStateException when the order complex is asked for and has too many cells
      */
     public static ChainComplex select(Poset poset, ComplexChoice choice) {
-        return switch (choice) {
-            case ORDER -> OrderComplex.of(poset);
-            case CELLULAR -> CellularComplex.of(poset);
-            case AUTO -> {
-                CwStructure structure = CwPosetCheck.analyse(poset);
-                yield structure.verdict().isCwPoset()
-                        ? CellularComplex.from(poset, structure.coverSigns())
-                        : OrderComplex.of(poset);
-            }
-        };
+        return selectWithVerdict(poset, choice).complex();
+    }
+
+    /**
+     * Like {@link #select}, also returning the CW poset verdict; the poset is analysed once, whatever
+     * the choice.
+     */
+    public static ComplexSelection selectWithVerdict(Poset poset, ComplexChoice choice) {
+        return selectWithVerdict(poset, choice, UnaryOperator.identity());
+    }
+
+    /**
+     * Like {@link #selectWithVerdict(Poset, ComplexChoice)}, with {@code beforeOrderComplex} applied
+     * to the poset just before its order complex is built, and never when the cellular complex is
+     * chosen: the place for reductions that keep the homology of the order complex but would spoil
+     * the CW structure.
+     */
+    public static ComplexSelection selectWithVerdict(Poset poset, ComplexChoice choice,
+            UnaryOperator<Poset> beforeOrderComplex) {
+        if (choice == ComplexChoice.ORDER) {
+            return new ComplexSelection(OrderComplex.of(beforeOrderComplex.apply(poset)), Optional.empty());
+        }
+        CwStructure structure = CwPosetCheck.analyse(poset);
+        CwPosetVerdict verdict = structure.verdict();
+        if (verdict.isCwPoset()) {
+            return new ComplexSelection(CellularComplex.from(poset, structure.coverSigns()), Optional.of(verdict));
+        }
+        if (choice == ComplexChoice.CELLULAR) {
+            throw new IllegalArgumentException(verdict.reason());
+        }
+        return new ComplexSelection(OrderComplex.of(beforeOrderComplex.apply(poset)), Optional.of(verdict));
     }
 }

@@ -58,6 +58,7 @@ public record Coefficients(Ring ring, int prime) {
         return ring == Ring.INTEGERS;
     }
 
+    /** {@code Z}, {@code Q} or the prime, as {@link #parse} reads it. */
     @Override
     public String toString() {
         return switch (ring) {

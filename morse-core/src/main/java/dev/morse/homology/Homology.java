@@ -54,6 +54,7 @@ public record Homology(Coefficients coefficients, boolean reduced, List<Homology
         return chi;
     }
 
+    /** One line per dimension, like {@code H1 = Z + Z/2}. */
     @Override
     public String toString() {
         StringBuilder s = new StringBuilder();

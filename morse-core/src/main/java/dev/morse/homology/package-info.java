@@ -1,5 +1,5 @@
 /**
- * Exact homology: sparse Smith normal form over the integers, ranks over Z/p and Q, and the
- * immutable {@link dev.morse.homology.Homology} result.
+ * Exact homology of chain complexes: sparse Smith normal form over Z, exact ranks over Q and Z/p,
+ * a dense oracle to test them against, and the immutable {@link dev.morse.homology.Homology} result.
  */
 package dev.morse.homology;

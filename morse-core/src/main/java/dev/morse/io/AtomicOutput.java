@@ -38,7 +38,7 @@ public final class AtomicOutput {
         Path absolute = target.toAbsolutePath();
         Path directory = absolute.getParent();
         if (Files.isDirectory(absolute)) {
-            throw new InputException(target.toString(), InputException.NO_LINE, "is a directory; give a file name to write");
+            throw new InputException(target.toString(), InputException.NO_LINE, "is a directory; name a file to write");
         }
         if (directory == null || !Files.isDirectory(directory)) {
             throw new InputException(target.toString(), InputException.NO_LINE, "cannot be written: no such directory");

@@ -1,9 +1,8 @@
 package dev.morse.matching;
 
-import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayFIFOQueue;
-import java.util.Arrays;
 
 /**
  * Elementary collapses (Whitehead 1939; as a Morse matching, Forman 1998): a cell {@code t} with
@@ -26,62 +25,30 @@ public final class CollapseHeuristic implements MatchingHeuristic {
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
         int n = complex.cellCount();
-        Boundary boundary = complex.boundary();
-        Boundary coboundary = complex.coboundary();
-        int[] mates = new int[n];
-        Arrays.fill(mates, Matching.CRITICAL);
-        boolean[] removed = new boolean[n];
-        int[] cofacesLeft = new int[n];
+        FreeFaceState state = new FreeFaceState(complex);
         IntArrayFIFOQueue queue = new IntArrayFIFOQueue();
         for (int c = 0; c < n; c++) {
-            cofacesLeft[c] = coboundary.size(c);
-            if (cofacesLeft[c] == 1) {
+            if (state.isFree(c)) {
                 queue.enqueue(c);
             }
         }
         int next = n - 1;
+        Progress progress = Progress.current();
+        int pairs = 0;
         while (true) {
             while (!queue.isEmpty()) {
                 int t = queue.dequeueInt();
-                if (removed[t] || cofacesLeft[t] != 1) {
-                    continue;
-                }
-                int entry = lastCofaceEntry(t, removed, coboundary);
-                int coefficient = coboundary.coefficient(entry);
-                if (coefficient == 1 || coefficient == -1) {
-                    int s = coboundary.target(entry);
-                    mates[s] = t;
-                    mates[t] = s;
-                    remove(s, removed, cofacesLeft, boundary, queue);
-                    remove(t, removed, cofacesLeft, boundary, queue);
+                if (state.isFree(t) && state.collapse(t, queue::enqueue) && (++pairs & 0x7FF) == 0) {
+                    progress.reached(2L * pairs);
                 }
             }
-            while (next >= 0 && removed[next]) {
+            while (next >= 0 && state.isRemoved(next)) {
                 next--;
             }
             if (next < 0) {
-                return Matching.adopt(mates);
+                return state.matching();
             }
-            remove(next, removed, cofacesLeft, boundary, queue);
+            state.remove(next, queue::enqueue);
         }
-    }
-
-    private static void remove(int c, boolean[] removed, int[] cofacesLeft, Boundary boundary, IntArrayFIFOQueue queue) {
-        removed[c] = true;
-        for (int i = boundary.start(c); i < boundary.end(c); i++) {
-            int f = boundary.target(i);
-            if (!removed[f] && --cofacesLeft[f] == 1) {
-                queue.enqueue(f);
-            }
-        }
-    }
-
-    private static int lastCofaceEntry(int t, boolean[] removed, Boundary coboundary) {
-        for (int i = coboundary.start(t); i < coboundary.end(t); i++) {
-            if (!removed[coboundary.target(i)]) {
-                return i;
-            }
-        }
-        throw new IllegalStateException("coface count out of step with the coboundary");
     }
 }

@@ -1,9 +1,8 @@
 package dev.morse.matching;
 
-import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
-import java.util.Arrays;
 import java.util.SplittableRandom;
 
 /**
@@ -21,55 +20,47 @@ public final class RandomHeuristic implements MatchingHeuristic {
         return "random";
     }
 
+    /** Each seed gives its own run. */
+    @Override
+    public boolean randomized() {
+        return true;
+    }
+
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
         SplittableRandom random = new SplittableRandom(options.seed());
         int n = complex.cellCount();
-        Boundary boundary = complex.boundary();
-        Boundary coboundary = complex.coboundary();
-        int[] mates = new int[n];
-        Arrays.fill(mates, Matching.CRITICAL);
-        boolean[] removed = new boolean[n];
-        int[] cofacesLeft = new int[n];
+        FreeFaceState state = new FreeFaceState(complex);
         IntArrayList freeFaces = new IntArrayList();
         for (int c = 0; c < n; c++) {
-            cofacesLeft[c] = coboundary.size(c);
-            if (cofacesLeft[c] == 1) {
+            if (state.isFree(c)) {
                 freeFaces.add(c);
             }
         }
         int[] shuffled = shuffledByDimension(complex, random);
         int next = n - 1;
-        int left = n;
-        while (left > 0) {
+        Progress progress = Progress.current();
+        int pairs = 0;
+        while (true) {
             if (!freeFaces.isEmpty()) {
                 int pick = random.nextInt(freeFaces.size());
                 int t = freeFaces.getInt(pick);
                 freeFaces.set(pick, freeFaces.getInt(freeFaces.size() - 1));
                 freeFaces.removeInt(freeFaces.size() - 1);
-                if (removed[t] || cofacesLeft[t] != 1) {
-                    continue;
-                }
-                int entry = remainingEntry(t, removed, coboundary);
-                int coefficient = coboundary.coefficient(entry);
-                if (coefficient == 1 || coefficient == -1) {
-                    int s = coboundary.target(entry);
-                    mates[s] = t;
-                    mates[t] = s;
-                    remove(s, removed, cofacesLeft, boundary, freeFaces);
-                    remove(t, removed, cofacesLeft, boundary, freeFaces);
-                    left -= 2;
+                if (state.isFree(t) && state.collapse(t, freeFaces::add) && (++pairs & 0x7FF) == 0) {
+                    progress.reached(2L * pairs);
                 }
                 continue;
             }
             // shuffled lists each dimension's cells in random order, dimensions ascending
-            while (removed[shuffled[next]]) {
+            while (next >= 0 && state.isRemoved(shuffled[next])) {
                 next--;
             }
-            remove(shuffled[next], removed, cofacesLeft, boundary, freeFaces);
-            left--;
+            if (next < 0) {
+                return state.matching();
+            }
+            state.remove(shuffled[next], freeFaces::add);
         }
-        return Matching.adopt(mates);
     }
 
     private static int[] shuffledByDimension(ChainComplex complex, SplittableRandom random) {
@@ -88,24 +79,5 @@ public final class RandomHeuristic implements MatchingHeuristic {
             }
         }
         return cells;
-    }
-
-    private static void remove(int c, boolean[] removed, int[] cofacesLeft, Boundary boundary, IntArrayList freeFaces) {
-        removed[c] = true;
-        for (int i = boundary.start(c); i < boundary.end(c); i++) {
-            int f = boundary.target(i);
-            if (!removed[f] && --cofacesLeft[f] == 1) {
-                freeFaces.add(f);
-            }
-        }
-    }
-
-    private static int remainingEntry(int t, boolean[] removed, Boundary coboundary) {
-        for (int i = coboundary.start(t); i < coboundary.end(t); i++) {
-            if (!removed[coboundary.target(i)]) {
-                return i;
-            }
-        }
-        throw new IllegalStateException("coface count out of step with the coboundary");
     }
 }

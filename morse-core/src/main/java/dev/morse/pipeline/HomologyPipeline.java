@@ -1,18 +1,23 @@
 package dev.morse.pipeline;
 
-import dev.morse.complex.CellularComplex;
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.complex.CwPosetCheck;
+import dev.morse.complex.ComplexSelection;
+import dev.morse.complex.ComplexSelector;
 import dev.morse.complex.CwPosetVerdict;
 import dev.morse.complex.Facets;
-import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.homology.Homology;
 import dev.morse.io.InputException;
 import dev.morse.io.InputFormat;
 import dev.morse.io.PosetReader;
 import dev.morse.io.SimplicialReader;
+import dev.morse.matching.MatchingHeuristic;
+import dev.morse.matching.MatchingHeuristics;
+import dev.morse.matching.MatchingOptions;
+import dev.morse.matching.MatchingTrials;
+import dev.morse.matching.TrialCount;
+import dev.morse.morse.MorseReduction;
 import dev.morse.poset.Poset;
 import dev.morse.report.HomologyReport;
 import dev.morse.report.PhaseTiming;
@@ -22,12 +27,6 @@ import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import dev.morse.matching.MatchingHeuristic;
-import dev.morse.matching.MatchingHeuristics;
-import dev.morse.matching.MatchingOptions;
-import dev.morse.matching.MatchingTrials;
-import dev.morse.matching.TrialCount;
-import dev.morse.morse.MorseReduction;
 import java.util.List;
 import java.util.Optional;
 import dev.morse.homology.HomologyGroup;
@@ -39,6 +38,7 @@ import dev.morse.reduction.ReductionResult;
 import dev.morse.reduction.ReductionStats;
 import dev.morse.report.ImageFacts;
 import java.util.function.Function;
+import java.util.function.UnaryOperator;
 
 /**
  * Runs homology on one input: detects the format from the header line, reads it, builds the chain
@@ -200,32 +200,30 @@ public final class HomologyPipeline {
 
     private static HomologyReport fromPoset(String source, Poset poset, HomologyOptions options, PhaseTiming read) {
         long start = System.nanoTime();
-        Optional<CwPosetVerdict> verdict = options.complex() == ComplexChoice.ORDER
-                ? Optional.empty()
-                : Optional.of(CwPosetCheck.check(poset));
-        boolean cellular = verdict.map(CwPosetVerdict::isCwPoset).orElse(false);
-        if (options.complex() == ComplexChoice.CELLULAR && !cellular) {
+        List<ReductionStats> reduction = new ArrayList<>(1);
+        UnaryOperator<Poset> shrink = options.posetReduction()
+                ? p -> {
+                    ReductionResult result = PosetReduction.reduce(p);
+                    reduction.add(result.stats());
+                    return result.poset();
+                }
+                : UnaryOperator.identity();
+        ComplexSelection selection;
+        try {
+            selection = ComplexSelector.selectWithVerdict(poset, options.complex(), shrink);
+        } catch (IllegalArgumentException notCw) {
             throw new InputException(source, InputException.NO_LINE,
-                    "the cellular complex needs a CW poset, and this is not one: " + verdict.orElseThrow().reason());
+                    "the cellular complex needs a CW poset, and this is not one: " + notCw.getMessage());
+        } catch (IllegalStateException e) {
+            throw tooLarge(source, e);
         }
-        if (cellular) {
-            return finish(source, InputFormat.POSET, CellularComplex.of(poset), verdict, options, read,
-                    PhaseTiming.since(COMPLEX, start));
-        }
-        Optional<ReductionStats> reduction = Optional.empty();
-        Poset shrunk = poset;
-        if (options.posetReduction()) {
-            ReductionResult result = PosetReduction.reduce(poset);
-            shrunk = result.poset();
-            reduction = Optional.of(result.stats());
-        }
-        ChainComplex complex = orderComplex(source, shrunk);
-        double reductionMs = reduction.map(ReductionStats::milliseconds).orElse(0.0);
+        Optional<ReductionStats> stats = reduction.stream().findFirst();
+        double reductionMs = stats.map(ReductionStats::milliseconds).orElse(0.0);
         PhaseTiming build = PhaseTiming.since(COMPLEX, start);
         build = new PhaseTiming(COMPLEX, Math.max(0, build.milliseconds() - reductionMs));
         // the homology is that of Δ(P): listed up to its dimension even where the reduced poset is lower
-        return finish(source, InputFormat.POSET, complex, verdict, options, read, build, poset.maxHeight(), reduction,
-                homology -> Optional.empty());
+        return finish(source, InputFormat.POSET, selection.complex(), selection.verdict(), options, read, build,
+                poset.maxHeight(), stats, homology -> Optional.empty());
     }
 
     private static HomologyReport fromFacets(String source, Facets facets, HomologyOptions options, PhaseTiming read) {
@@ -242,15 +240,6 @@ public final class HomologyPipeline {
         }
         return finish(source, InputFormat.SIMPLICIAL, complex, Optional.empty(), options, read,
                 PhaseTiming.since(COMPLEX, start));
-    }
-
-    /** The order complex; the complexes report too many cells by an IllegalStateException before building any. */
-    private static ChainComplex orderComplex(String source, Poset poset) {
-        try {
-            return OrderComplex.of(poset);
-        } catch (IllegalStateException e) {
-            throw tooLarge(source, e);
-        }
     }
 
     private static InputException tooLarge(String source, IllegalStateException e) {

@@ -10,6 +10,8 @@ import dev.morse.morse.MorseReduction;
 import dev.morse.poset.OrderCycleException;
 import dev.morse.poset.Poset;
 import dev.morse.poset.PosetBuilder;
+import dev.morse.progress.Progress;
+import dev.morse.progress.ProgressScope;
 
 /**
  * Decides whether the open lower set {@code P_<x} or the open upper set {@code P_>x} of an element
@@ -74,17 +76,21 @@ final class LinkTest {
         if (euler != 0) {
             return Verdict.NOT_ACYCLIC;
         }
-        OrderComplex complex;
-        try {
-            complex = OrderComplex.of(subposet(set), limits.maxLinkChains());
-        } catch (IllegalStateException tooMany) {
-            budget -= limits.maxLinkChains();
-            return Verdict.SKIPPED;
+        Homology homology;
+        // the homology of one link is part of the reduction, not a phase of its own
+        try (ProgressScope quiet = Progress.use(Progress.SILENT)) {
+            OrderComplex complex;
+            try {
+                complex = OrderComplex.of(subposet(set), limits.maxLinkChains());
+            } catch (IllegalStateException tooMany) {
+                budget -= limits.maxLinkChains();
+                return Verdict.SKIPPED;
+            }
+            budget -= complex.cellCount();
+            homology = MorseReduction.run(complex, new MorseReduction.Request(
+                    MatchingHeuristics.byName(MatchingHeuristics.DEFAULT).orElseThrow(), MatchingOptions.DEFAULT,
+                    Coefficients.INTEGERS, true)).homology().toReduced();
         }
-        budget -= complex.cellCount();
-        Homology homology = MorseReduction.run(complex, new MorseReduction.Request(
-                MatchingHeuristics.byName(MatchingHeuristics.DEFAULT).orElseThrow(), MatchingOptions.DEFAULT,
-                Coefficients.INTEGERS, true)).homology().toReduced();
         for (HomologyGroup group : homology.groups()) {
             if (!group.isTrivial()) {
                 return Verdict.NOT_ACYCLIC;

@@ -1,6 +1,7 @@
 package dev.morse.reduction;
 
 import dev.morse.poset.Poset;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 
 /**
@@ -43,7 +44,10 @@ public final class PosetReduction {
         }
         run.removeBeatPoints();
         int[] bottomUp = poset.linearExtension();
+        Progress progress = Progress.current();
+        progress.begin("poset reduction", "elements", (long) limits.passes() * poset.size());
         for (int pass = 0; pass < limits.passes(); pass++) {
+            progress.reached((long) pass * poset.size());
             if (run.sweep(bottomUp) == 0) {
                 break;
             }

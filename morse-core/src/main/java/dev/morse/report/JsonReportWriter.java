@@ -2,9 +2,7 @@ package dev.morse.report;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
-import com.fasterxml.jackson.core.util.Separators;
 import dev.morse.complex.CwPosetVerdict;
 import dev.morse.homology.HomologyGroup;
 import java.io.IOException;
@@ -89,15 +87,7 @@ public final class JsonReportWriter {
     }
 
     private static DefaultPrettyPrinter prettyPrinter() {
-        Separators separators = Separators.createDefaultInstance()
-                .withObjectFieldValueSpacing(Separators.Spacing.AFTER)
-                .withArrayEmptySeparator("")
-                .withObjectEmptySeparator("");
-        DefaultPrettyPrinter printer = new DefaultPrettyPrinter(separators);
-        // objects one field per line; arrays stay on one line, where cell counts read best
-        printer.indentObjectsWith(new DefaultIndenter("  ", "\n"));
-        printer.indentArraysWith(DefaultPrettyPrinter.FixedSpaceIndenter.instance);
-        return printer;
+        return JsonStyle.prettyPrinter();
     }
 
     private static void writeIntArray(JsonGenerator json, String field, List<Integer> values) throws IOException {
@@ -108,7 +98,7 @@ public final class JsonReportWriter {
         json.writeEndArray();
     }
 
-    private static void writeHomology(JsonGenerator json, List<HomologyGroup> groups) throws IOException {
+    static void writeHomology(JsonGenerator json, List<HomologyGroup> groups) throws IOException {
         json.writeArrayFieldStart("homology");
         for (HomologyGroup group : groups) {
             json.writeStartObject();
@@ -140,7 +130,7 @@ public final class JsonReportWriter {
         json.writeEndArray();
     }
 
-    private static void writeTrials(JsonGenerator json, List<TrialCount> trials) throws IOException {
+    static void writeTrials(JsonGenerator json, List<TrialCount> trials) throws IOException {
         json.writeArrayFieldStart("trials");
         for (TrialCount trial : trials) {
             json.writeStartObject();

@@ -9,30 +9,41 @@ import dev.morse.pipeline.HomologyPipeline;
 import dev.morse.report.HomologyReport;
 import dev.morse.report.JsonReportWriter;
 import dev.morse.report.TextReportWriter;
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalInt;
+import dev.morse.image.ImageOptions;
+import dev.morse.image.VolumeSize;
+import picocli.CommandLine.ParameterException;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-/** {@code morse homology FILE}: the homology of one poset or simplicial file. */
+/** {@code morse homology FILE...}: the homology of one poset or simplicial file, image or volume. */
 @Command(name = "homology",
         description = {
-            "Computes the exact homology of a poset or simplicial file.",
+            "Computes the exact homology of a poset or simplicial file, or of the foreground of an image or volume.",
             "A poset file (morse-poset 1) stands for its order complex, computed on the much smaller cellular"
-                    + " complex when the poset is a CW poset; a simplicial file (morse-simplicial 1) stands for all"
-                    + " faces of its listed faces."
+                    + " complex when the poset is a CW poset, else on the poset shrunk by beat points and acyclic"
+                    + " links; a simplicial file (morse-simplicial 1) stands for all faces of its listed faces.",
+            "An image (PBM, PGM, PPM, PNG, GIF, BMP, JPEG) stands for the cubical complex of its pixels at or above"
+                    + " the threshold; several images, or a directory of them, are the slices of a volume; a raw"
+                    + " byte volume needs --dims. Images are told by their first bytes."
         })
 final class HomologyCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "FILE", description = "A morse-poset 1 or morse-simplicial 1 file.")
-    private Path file;
+    @Parameters(arity = "1..*", paramLabel = "FILE",
+            description = "A morse-poset 1 or morse-simplicial 1 file, an image, a directory of slices, several"
+                    + " slice images in order, or a raw volume.")
+    private List<Path> files;
 
     @Option(names = "--json", description = "Print one JSON object instead of a table.")
     private boolean json;
@@ -83,6 +94,26 @@ final class HomologyCommand implements Callable<Integer> {
     @Option(names = "--no-verify", description = "Trust the matching without checking that it is acyclic.")
     private boolean noVerify;
 
+    @Option(names = "--no-poset-reduction",
+            description = "Build the order complex on the poset as given, without first removing beat points and"
+                    + " elements with acyclic links (which keeps the homology and is on by default).")
+    private boolean noPosetReduction;
+
+    @Option(names = "--threshold", paramLabel = "T",
+            description = "Image samples at or above T are the foreground (default: half the sample range, so the"
+                    + " black pixels of a bitmap and samples 128..255 of an 8-bit image; 1 for raw volumes).")
+    private Integer threshold;
+
+    @Option(names = "--invert", description = "Take the samples below the threshold as the foreground.")
+    private boolean invert;
+
+    @Option(names = "--dims", paramLabel = "X,Y[,Z]", converter = OptionConverters.VolumeSizeConverter.class,
+            description = "Read FILE as a raw volume of unsigned bytes with these sizes, x varying fastest.")
+    private VolumeSize dims;
+
+    @Mixin
+    private ProgressOption progress;
+
     // read by Failures through the parse result, which is where it matters
     @Option(names = "--debug", description = "Show stack traces of failures.")
     private boolean debug;
@@ -91,10 +122,15 @@ final class HomologyCommand implements Callable<Integer> {
     private boolean help;
 
     @Override
-    public Integer call() throws IOException {
-        HomologyReport report = HomologyPipeline.run(file,
-                new HomologyOptions(complex, coefficients, reduced, matching, seed, trials, !noVerify, elementOrder,
-                        maxStoredChains));
+    public Integer call() throws Exception {
+        if (threshold != null && threshold < 0) {
+            throw new ParameterException(spec.commandLine(), "the threshold must not be negative, not " + threshold);
+        }
+        ImageOptions image = new ImageOptions(threshold == null ? OptionalInt.empty() : OptionalInt.of(threshold),
+                invert, Optional.ofNullable(dims));
+        HomologyOptions options = new HomologyOptions(complex, coefficients, reduced, matching, seed, trials,
+                !noVerify, !noPosetReduction, image, elementOrder, maxStoredChains);
+        HomologyReport report = progress.around(spec, () -> HomologyPipeline.run(files, options));
         String text = json ? JsonReportWriter.toJson(report) : TextReportWriter.toText(report);
         PrintWriter out = spec.commandLine().getOut();
         out.print(text);

@@ -15,7 +15,10 @@ import picocli.CommandLine.Spec;
 /** The {@code morse} command: exact homology of posets and simplicial complexes. */
 @Command(name = "morse",
         description = "Exact homology of posets (order complexes), CW posets (cellular complexes) and simplicial complexes.",
-        subcommands = {HomologyCommand.class, DemoCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {HomologyCommand.class, DemoCommand.class,
+            InspectCommand.class, CompareCommand.class, DrawCommand.class, ExportCommand.class,
+            GenerateCommand.class, OperationCommand.class,
+            CommandLine.HelpCommand.class},
         footer = "%nExit codes: 0 success, 2 bad input or options, 1 internal failure.")
 public final class MorseCommand implements Callable<Integer> {
     @Spec
@@ -61,6 +64,7 @@ public final class MorseCommand implements Callable<Integer> {
     /** Without a subcommand there is nothing to do: a usage error. */
     @Override
     public Integer call() {
-        throw new ParameterException(spec.commandLine(), "a subcommand is required: homology, demo or help");
+        throw new ParameterException(spec.commandLine(), "a subcommand is required: "
+                + String.join(", ", spec.subcommands().keySet()));
     }
 }

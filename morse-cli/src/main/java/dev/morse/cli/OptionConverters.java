@@ -1,6 +1,12 @@
 package dev.morse.cli;
 
 import dev.morse.complex.ComplexChoice;
+import dev.morse.generate.FacePart;
+import dev.morse.image.VolumeSize;
+import java.util.Collections;
+import java.util.Set;
+import java.util.StringJoiner;
+import java.util.TreeSet;
 import dev.morse.homology.Coefficients;
 import dev.morse.implicit.ElementOrder;
 import dev.morse.pipeline.HomologyPipeline;
@@ -85,6 +91,80 @@ final class OptionConverters {
         public Iterator<String> iterator() {
             List<String> names = HomologyPipeline.matchingNames();
             return names.iterator();
+        }
+    }
+
+    /** {@code boundary}, {@code closed} or {@code lattice}. */
+    static final class FacePartConverter implements ITypeConverter<FacePart> {
+        @Override
+        public FacePart convert(String value) {
+            for (FacePart part : FacePart.values()) {
+                if (part.optionName().equals(value.strip())) {
+                    return part;
+                }
+            }
+            throw new TypeConversionException("the part must be boundary, closed or lattice, not '" + value + "'");
+        }
+    }
+
+    /** Sizes like {@code 64,64,32}. */
+    static final class VolumeSizeConverter implements ITypeConverter<VolumeSize> {
+        @Override
+        public VolumeSize convert(String value) {
+            try {
+                return VolumeSize.parse(value);
+            } catch (IllegalArgumentException e) {
+                throw new TypeConversionException(e.getMessage());
+            }
+        }
+    }
+
+    /**
+     * A set of ranks, ascending.
+     *
+     * @param values the ranks
+     */
+    record Ranks(Set<Integer> values) {
+        /** Copies. */
+        Ranks {
+            values = Collections.unmodifiableSet(new TreeSet<>(values));
+        }
+
+        /** The ranks joined by commas. */
+        @Override
+        public String toString() {
+            StringJoiner text = new StringJoiner(",");
+            values.forEach(r -> text.add(Integer.toString(r)));
+            return text.toString();
+        }
+    }
+
+    /** A set of ranks like {@code 1,3} or {@code 0,2-4}. */
+    static final class RanksConverter implements ITypeConverter<Ranks> {
+        private static final int MAX_RANK_RANGE = 1_000_000;
+
+        @Override
+        public Ranks convert(String value) {
+            Set<Integer> ranks = new TreeSet<>();
+            for (String part : value.split(",", -1)) {
+                String p = part.strip();
+                try {
+                    int dash = p.indexOf('-');
+                    int from = Integer.parseInt(dash < 0 ? p : p.substring(0, dash).strip());
+                    int to = dash < 0 ? from : Integer.parseInt(p.substring(dash + 1).strip());
+                    if (from < 0 || to < from || to - from > MAX_RANK_RANGE) {
+                        throw new TypeConversionException("ranks must be non-negative, ranges ascending and shorter"
+                                + " than " + MAX_RANK_RANGE + ": '" + p + "'");
+                    }
+                    for (int r = from; r <= to; r++) {
+                        ranks.add(r);
+                    }
+                } catch (NumberFormatException e) {
+                    throw new TypeConversionException("ranks must be numbers or ranges like 1,3 or 0,2-4, not '"
+                            + value + "'");
+                }
+            }
+            return new Ranks(ranks);
         }
     }
 }

@@ -2,6 +2,7 @@ package dev.morse.complex;
 
 import dev.morse.poset.Adjacency;
 import dev.morse.poset.Poset;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import it.unimi.dsi.fastutil.ints.IntArrays;
 import it.unimi.dsi.fastutil.longs.LongArrayList;
@@ -168,7 +169,16 @@ final class ChainEnumerator {
         for (int x = 0; x < n; x++) {
             chains[0][x] = x;
         }
+        long total = 0;
+        for (long c : counts) {
+            total += c;
+        }
+        Progress progress = Progress.current();
+        progress.begin("order complex", "chains", total);
+        long listed = n;
         for (int d = 1; d <= top; d++) {
+            progress.reached(listed);
+            listed += counts[d];
             int parents = (int) counts[d - 1];
             int[] below = chains[d - 1];
             int[] next = new int[(int) counts[d] * (d + 1)];
@@ -207,10 +217,15 @@ final class ChainEnumerator {
         int entry = 0;
         int firstBelow = 0;
         int[] face = new int[top + 1];
+        Progress progress = Progress.current();
+        progress.begin("order complex boundary", "chains", cellTotal);
         for (int d = 1; d <= top; d++) {
             int[] list = chains[d];
             int count = (int) counts[d];
             for (int c = 0; c < count; c++) {
+                if ((c & 0xFFF) == 0) {
+                    progress.reached(cell);
+                }
                 int at = c * (d + 1);
                 for (int i = 0; i <= d; i++) {
                     int k = 0;

@@ -7,7 +7,9 @@ public enum ComplexKind {
     /** The order complex: one simplex per nonempty chain of a poset. */
     ORDER("order"),
     /** All faces of listed faces. */
-    SIMPLICIAL("simplicial");
+    SIMPLICIAL("simplicial"),
+    /** The elementary cubes of a set of pixels or voxels. */
+    CUBICAL("cubical");
 
     private final String reportName;
 

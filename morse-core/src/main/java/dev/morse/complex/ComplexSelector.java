@@ -2,6 +2,7 @@ package dev.morse.complex;
 
 import dev.morse.poset.Poset;
 import java.util.Optional;
+import java.util.function.UnaryOperator;
 
 /**
  * Builds the chain complex of a poset that a {@link ComplexChoice} asks for. Either complex has
@@ -29,8 +30,19 @@ public final class ComplexSelector {
      * the choice.
      */
     public static ComplexSelection selectWithVerdict(Poset poset, ComplexChoice choice) {
+        return selectWithVerdict(poset, choice, UnaryOperator.identity());
+    }
+
+    /**
+     * Like {@link #selectWithVerdict(Poset, ComplexChoice)}, with {@code beforeOrderComplex} applied
+     * to the poset just before its order complex is built, and never when the cellular complex is
+     * chosen: the place for reductions that keep the homology of the order complex but would spoil
+     * the CW structure.
+     */
+    public static ComplexSelection selectWithVerdict(Poset poset, ComplexChoice choice,
+            UnaryOperator<Poset> beforeOrderComplex) {
         if (choice == ComplexChoice.ORDER) {
-            return new ComplexSelection(OrderComplex.of(poset), Optional.empty());
+            return new ComplexSelection(OrderComplex.of(beforeOrderComplex.apply(poset)), Optional.empty());
         }
         if (choice == ComplexChoice.IMPLICIT) {
             throw new IllegalArgumentException(
@@ -44,7 +56,7 @@ public final class ComplexSelector {
         if (choice == ComplexChoice.CELLULAR) {
             throw new IllegalArgumentException(verdict.reason());
         }
-        return new ComplexSelection(OrderComplex.of(poset), Optional.of(verdict));
+        return new ComplexSelection(OrderComplex.of(beforeOrderComplex.apply(poset)), Optional.of(verdict));
     }
 
     /**

@@ -6,6 +6,8 @@ import dev.morse.homology.HomologyCalculator;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.poset.Adjacency;
 import dev.morse.poset.Poset;
+import dev.morse.progress.Progress;
+import dev.morse.progress.ProgressScope;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import java.util.Arrays;
 
@@ -97,10 +99,16 @@ public final class CwPosetCheck {
             if (failure != null) {
                 return CwStructure.failed(failure);
             }
+            Progress progress = Progress.current();
+            progress.begin("cw check", "elements", n);
+            int checked = 0;
             for (int x : byHeight()) {
                 failure = elementFailure(x);
                 if (failure != null) {
                     return CwStructure.failed(failure);
+                }
+                if ((++checked & 0x3FF) == 0) {
+                    progress.reached(checked);
                 }
             }
             return CwStructure.passed(signs);
@@ -316,7 +324,11 @@ public final class CwPosetCheck {
             }
             ChainComplex cells = new ListedComplex(ComplexKind.CELLULAR, new GradedCells(counts),
                     new Boundary(offsets, targets, coefficients), c -> poset.label(below[c]));
-            Homology homology = HomologyCalculator.compute(cells, Coefficients.INTEGERS);
+            Homology homology;
+            // the homology of one lower set is part of this check, not a phase of its own
+            try (ProgressScope quiet = Progress.use(Progress.SILENT)) {
+                homology = HomologyCalculator.compute(cells, Coefficients.INTEGERS);
+            }
             for (int d = 0; d < h; d++) {
                 HomologyGroup group = homology.group(d);
                 int betti = d == 0 || d == h - 1 ? 1 : 0;

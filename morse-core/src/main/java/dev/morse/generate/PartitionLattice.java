@@ -58,7 +58,7 @@ public final class PartitionLattice {
      * All restricted growth strings: {@code blockOf[i]} is the block of element {@code i+1}, blocks
      * numbered in order of their least elements, so each partition appears exactly once.
      */
-    private static void growthStrings(int[] blockOf, int position, int blocksSoFar, List<int[]> out) {
+    static void growthStrings(int[] blockOf, int position, int blocksSoFar, List<int[]> out) {
         if (position == blockOf.length) {
             out.add(blockOf.clone());
             return;
@@ -69,7 +69,7 @@ public final class PartitionLattice {
         }
     }
 
-    private static int blockCount(int[] blockOf) {
+    static int blockCount(int[] blockOf) {
         int max = -1;
         for (int block : blockOf) {
             max = Math.max(max, block);
@@ -78,7 +78,7 @@ public final class PartitionLattice {
     }
 
     /** Merges block {@code t} into block {@code s < t} and renumbers to a growth string again. */
-    private static int[] merge(int[] blockOf, int s, int t) {
+    static int[] merge(int[] blockOf, int s, int t) {
         int[] merged = new int[blockOf.length];
         for (int i = 0; i < blockOf.length; i++) {
             int block = blockOf[i] == t ? s : blockOf[i];
@@ -87,7 +87,7 @@ public final class PartitionLattice {
         return merged;
     }
 
-    private static String label(int[] blockOf) {
+    static String label(int[] blockOf) {
         int n = blockOf.length;
         StringBuilder s = new StringBuilder();
         for (int block = 0; block < blockCount(blockOf); block++) {

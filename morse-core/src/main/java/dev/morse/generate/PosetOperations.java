@@ -6,9 +6,13 @@ import dev.morse.poset.PosetBuilder;
 
 /**
  * Constructions of new posets from old: product, ordinal sum, dual, proper part, intervals,
- * relabelling. Every result is built from covers only, since each construction knows its covers.
+ * rank selection, the face poset of the order complex, relabelling. Most results are built from
+ * covers only, since those constructions know their covers.
  */
 public final class PosetOperations {
+    /** The most chains {@link #subdivision} lists. */
+    public static final long MAX_CHAINS = 5_000_000;
+
     private PosetOperations() {
     }
 
@@ -75,6 +79,20 @@ public final class PosetOperations {
         return Built.poset(b);
     }
 
+    /**
+     * The ordinal sum {@code lower ⊕ upper}, as {@link #ordinalSum}; if the two share a label,
+     * every label of {@code lower} gets the prefix {@code a.} and every label of {@code upper} the
+     * prefix {@code b.} first.
+     */
+    public static Poset ordinalSumKeepingLabelsApart(Poset lower, Poset upper) {
+        for (int x = 0; x < lower.size(); x++) {
+            if (upper.find(lower.label(x)).isPresent()) {
+                return ordinalSum(relabel(lower, "a."), relabel(upper, "b."));
+            }
+        }
+        return ordinalSum(lower, upper);
+    }
+
     /** The dual poset: the same elements and labels with the order reversed. */
     public static Poset dual(Poset p) {
         PosetBuilder b = new PosetBuilder();
@@ -88,6 +106,95 @@ public final class PosetOperations {
             }
         }
         return Built.poset(b);
+    }
+
+    /**
+     * The rank-selected subposet {@code P_S}: the elements whose rank lies in {@code ranks}, with
+     * the order of P. The rank of an element is its height (minimal elements have rank 0), the
+     * rank function when P is graded. Rank selection keeps Cohen–Macaulay posets Cohen–Macaulay
+     * (Munkres 1984; Stanley, Enumerative Combinatorics I, §3.13, from memory); in B_n the
+     * selection of S ⊆ {1..n-1} is a wedge of β_n(S) spheres of dimension |S| - 1, β_n(S) being
+     * the number of permutations of {1..n} with descent set S (Stanley, EC I, Thm 3.13.1, from
+     * memory).
+     *
+     * <p>Covers of P_S: each selected element is related to the selected elements first met going
+     * down from it, and the builder reduces that to covers.
+     */
+    public static Poset rankSelection(Poset p, java.util.Set<Integer> ranks) {
+        PosetBuilder b = new PosetBuilder();
+        int[] id = new int[p.size()];
+        for (int x = 0; x < p.size(); x++) {
+            id[x] = ranks.contains(p.height(x)) ? b.element(p.label(x)) : -1;
+        }
+        Adjacency below = p.lowerCovers();
+        int[] stamp = new int[p.size()];
+        java.util.Arrays.fill(stamp, -1);
+        int[] stack = new int[p.size()];
+        for (int x = 0; x < p.size(); x++) {
+            if (id[x] < 0) {
+                continue;
+            }
+            int top = 0;
+            stack[top++] = x;
+            while (top > 0) {
+                int z = stack[--top];
+                for (int i = below.start(z); i < below.end(z); i++) {
+                    int w = below.target(i);
+                    if (stamp[w] == x) {
+                        continue;
+                    }
+                    stamp[w] = x;
+                    if (id[w] >= 0) {
+                        b.relate(id[w], id[x], 0);
+                    } else {
+                        stack[top++] = w;
+                    }
+                }
+            }
+        }
+        return Built.poset(b);
+    }
+
+    /**
+     * The face poset of the order complex Δ(P): the nonempty chains of P ordered by inclusion,
+     * each chain covering the chains with one element fewer. Each chain is labelled by its
+     * elements' labels bottom first, joined by {@code <} (like {@code a<b<c}). Its order complex is
+     * the barycentric subdivision of Δ(P), homeomorphic to it (common practice; e.g. Munkres,
+     * Elements of Algebraic Topology, 1984, §15), and it is a CW poset.
+     *
+     * @throws IllegalArgumentException if P has more than {@link #MAX_CHAINS} chains, or if two
+     *     chains get the same label (possible only when labels contain {@code <})
+     */
+    public static Poset subdivision(Poset p) {
+        dev.morse.complex.OrderComplex complex;
+        try {
+            complex = dev.morse.complex.OrderComplex.of(p, MAX_CHAINS);
+        } catch (IllegalStateException e) {
+            throw new IllegalArgumentException("too many chains for their face poset: " + e.getMessage());
+        }
+        PosetBuilder b = new PosetBuilder();
+        for (int c = 0; c < complex.cellCount(); c++) {
+            b.element(complex.cellName(c));
+        }
+        if (b.size() != complex.cellCount()) {
+            throw new IllegalArgumentException("two chains get the same label; labels containing '<' are ambiguous here");
+        }
+        dev.morse.complex.Boundary boundary = complex.boundary();
+        for (int c = 0; c < complex.cellCount(); c++) {
+            for (int i = boundary.start(c); i < boundary.end(c); i++) {
+                b.relate(boundary.target(i), c, 0);
+            }
+        }
+        return Built.poset(b);
+    }
+
+    /**
+     * The element labelled {@code label}.
+     *
+     * @throws IllegalArgumentException if there is none
+     */
+    public static int element(Poset p, String label) {
+        return p.find(label).orElseThrow(() -> new IllegalArgumentException("no element is labelled '" + label + "'"));
     }
 
     /** A copy of {@code p} with {@code prefix} put before every label. */

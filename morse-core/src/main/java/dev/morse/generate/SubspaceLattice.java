@@ -8,10 +8,11 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The subspaces of {@code F_q^n} for a prime q, ordered by inclusion. Each subspace is held as its
- * basis in reduced row echelon form, which is unique, and labelled by it: rows as digit strings
- * inside angle brackets, like {@code <100,011>}; the zero subspace is {@code <>}. For
- * {@code q > 10} the entries of a row are separated by dots. A subspace is covered by the spans of
+ * The subspaces of {@code F_q^n} for a prime power q, ordered by inclusion. Each subspace is held
+ * as its basis in reduced row echelon form, which is unique, and labelled by it: rows as digit
+ * strings inside angle brackets, like {@code <100,011>}; the zero subspace is {@code <>}. For
+ * {@code q > 10} the entries of a row are separated by dots. The elements of {@code F_q} are
+ * written as the numbers {@code 0..q-1} of {@link FiniteField}. A subspace is covered by the spans of
  * it and one vector outside it. There are {@code Σ_k [n choose k]_q} subspaces (Gaussian
  * binomials), and by the Solomon–Tits theorem the proper part is a wedge of {@code q^C(n,2)}
  * spheres {@code S^(n-2)}.
@@ -23,9 +24,10 @@ public final class SubspaceLattice {
     private SubspaceLattice() {
     }
 
-    /** All subspaces of {@code F_q^n}, {@code n ≥ 1}, q prime. */
+    /** All subspaces of {@code F_q^n}, {@code n ≥ 1}, q a prime power. */
     public static Poset lattice(int q, int n) {
         check(q, n);
+        FiniteField field = FiniteField.of(q);
         int vectors = 1;
         for (int i = 0; i < n; i++) {
             vectors *= q;
@@ -42,11 +44,11 @@ public final class SubspaceLattice {
             int id = queue.poll();
             int[][] basis = bases.get(id);
             for (int code = 1; code < vectors; code++) {
-                int[] v = reduce(vector(code, q, n), basis, q);
+                int[] v = reduce(vector(code, q, n), basis, field);
                 if (isZero(v)) {
                     continue;
                 }
-                int[][] bigger = rowReduce(append(basis, v), q);
+                int[][] bigger = rowReduce(append(basis, v), field);
                 String name = label(bigger, q);
                 int upper;
                 if (ids.containsKey(name)) {
@@ -69,8 +71,8 @@ public final class SubspaceLattice {
     }
 
     private static void check(int q, int n) {
-        if (q < 2 || !isPrime(q)) {
-            throw new IllegalArgumentException("q must be a prime, got " + q);
+        if (q < 2 || q > FiniteField.MAX_ORDER || !isPrimePower(q)) {
+            throw new IllegalArgumentException("q must be a prime power in 2.." + FiniteField.MAX_ORDER + ", got " + q);
         }
         if (n < 1) {
             throw new IllegalArgumentException("n must be positive, got " + n);
@@ -84,13 +86,15 @@ public final class SubspaceLattice {
         }
     }
 
-    private static boolean isPrime(int q) {
-        for (int p = 2; p * p <= q; p++) {
-            if (q % p == 0) {
-                return false;
-            }
+    private static boolean isPrimePower(int q) {
+        int p = 2;
+        while (q % p != 0) {
+            p++;
         }
-        return true;
+        while (q % p == 0) {
+            q /= p;
+        }
+        return q == 1;
     }
 
     private static int[] vector(int code, int q, int n) {
@@ -121,14 +125,14 @@ public final class SubspaceLattice {
     }
 
     /** {@code v} minus its components along the pivots of an echelon basis. */
-    private static int[] reduce(int[] v, int[][] basis, int q) {
+    private static int[] reduce(int[] v, int[][] basis, FiniteField f) {
         int[] r = v.clone();
         for (int[] row : basis) {
             int p = pivot(row);
             int factor = r[p];
             if (factor != 0) {
                 for (int i = 0; i < r.length; i++) {
-                    r[i] = Math.floorMod(r[i] - factor * row[i], q);
+                    r[i] = f.minus(r[i], f.times(factor, row[i]));
                 }
             }
         }
@@ -145,7 +149,7 @@ public final class SubspaceLattice {
     }
 
     /** Gauss–Jordan elimination over F_q of linearly independent rows. */
-    private static int[][] rowReduce(int[][] rows, int q) {
+    private static int[][] rowReduce(int[][] rows, FiniteField f) {
         int n = rows[0].length;
         int rank = 0;
         for (int col = 0; col < n && rank < rows.length; col++) {
@@ -161,15 +165,15 @@ public final class SubspaceLattice {
             int[] swap = rows[rank];
             rows[rank] = rows[found];
             rows[found] = swap;
-            int inverse = inverse(rows[rank][col], q);
+            int inverse = f.inverse(rows[rank][col]);
             for (int i = 0; i < n; i++) {
-                rows[rank][i] = rows[rank][i] * inverse % q;
+                rows[rank][i] = f.times(rows[rank][i], inverse);
             }
             for (int r = 0; r < rows.length; r++) {
                 int factor = rows[r][col];
                 if (r != rank && factor != 0) {
                     for (int i = 0; i < n; i++) {
-                        rows[r][i] = Math.floorMod(rows[r][i] - factor * rows[rank][i], q);
+                        rows[r][i] = f.minus(rows[r][i], f.times(factor, rows[rank][i]));
                     }
                 }
             }
@@ -179,19 +183,6 @@ public final class SubspaceLattice {
             throw new IllegalStateException("rows were not independent");
         }
         return rows;
-    }
-
-    /** The inverse of a nonzero residue modulo the prime q, by Fermat's little theorem. */
-    private static int inverse(int a, int q) {
-        long result = 1;
-        long base = a;
-        for (int e = q - 2; e > 0; e >>= 1) {
-            if ((e & 1) != 0) {
-                result = result * base % q;
-            }
-            base = base * base % q;
-        }
-        return (int) result;
     }
 
     private static String label(int[][] basis, int q) {

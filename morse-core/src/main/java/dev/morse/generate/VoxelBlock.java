@@ -1,9 +1,8 @@
 package dev.morse.generate;
 
 import dev.morse.homology.HomologyGroup;
-import dev.morse.poset.OrderCycleException;
+import dev.morse.image.VoxelSet;
 import dev.morse.poset.Poset;
-import dev.morse.poset.PosetBuilder;
 import java.io.IOException;
 import java.io.Writer;
 import java.util.List;
@@ -26,6 +25,7 @@ public final class VoxelBlock {
     private final int tunnels;
     private final int cavities;
     private final boolean[] solid;
+    private final VoxelSet voxels;
 
     private VoxelBlock(int n, int tunnels, int cavities) {
         this.n = n;
@@ -49,6 +49,17 @@ public final class VoxelBlock {
             int z = 2 + 3 * (firstLayer + i / (slots * slots));
             solid[index(x, y, z)] = false;
         }
+        VoxelSet.Builder set = VoxelSet.builder(n, n, n);
+        for (int x = 0; x < n; x++) {
+            for (int y = 0; y < n; y++) {
+                for (int z = 0; z < n; z++) {
+                    if (solid[index(x, y, z)]) {
+                        set.add(x, y, z);
+                    }
+                }
+            }
+        }
+        this.voxels = set.build();
     }
 
     private static int tunnelLayers(int tunnels, int slots) {
@@ -75,6 +86,11 @@ public final class VoxelBlock {
             throw new IllegalArgumentException(tunnels + " tunnels and " + cavities + " cavities do not fit in a block of side " + n);
         }
         return new VoxelBlock(n, tunnels, cavities);
+    }
+
+    /** The solid voxels, at coordinates {@code (x, y, z)}. */
+    public VoxelSet voxels() {
+        return voxels;
     }
 
     /** Side of the block in voxels. */
@@ -139,88 +155,12 @@ public final class VoxelBlock {
      * increasing dimension, streaming.
      */
     public void write(Writer out) throws IOException {
-        out.write("morse-poset 1\n# a " + n + "^3 voxel block with " + tunnels + " tunnels and " + cavities
-                + " cavities: H = Z, Z^" + tunnels + ", Z^" + cavities + ", 0\n");
-        StringBuilder line = new StringBuilder(160);
-        forEachCell((x, y, z) -> {
-            line.setLength(0);
-            name(line, x, y, z);
-            int dim = (x & 1) + (y & 1) + (z & 1);
-            if (dim > 0) {
-                line.append(':');
-                if ((x & 1) == 1) {
-                    line.append(' ');
-                    name(line, x - 1, y, z);
-                    line.append(' ');
-                    name(line, x + 1, y, z);
-                }
-                if ((y & 1) == 1) {
-                    line.append(' ');
-                    name(line, x, y - 1, z);
-                    line.append(' ');
-                    name(line, x, y + 1, z);
-                }
-                if ((z & 1) == 1) {
-                    line.append(' ');
-                    name(line, x, y, z - 1);
-                    line.append(' ');
-                    name(line, x, y, z + 1);
-                }
-            }
-            line.append('\n');
-            out.append(line);
-        });
+        CubicalFacePoset.write(voxels, out, "a " + n + "^3 voxel block with " + tunnels + " tunnels and " + cavities
+                + " cavities: H = Z, Z^" + tunnels + ", Z^" + cavities + ", 0");
     }
 
     /** The face poset, built in memory. */
     public Poset toPoset() {
-        PosetBuilder builder = new PosetBuilder();
-        StringBuilder s = new StringBuilder();
-        try {
-            forEachCell((x, y, z) -> {
-                int cell = builder.element(label(s, x, y, z));
-                int[][] steps = {{1, 0, 0}, {0, 1, 0}, {0, 0, 1}};
-                int[] at = {x, y, z};
-                for (int axis = 0; axis < 3; axis++) {
-                    if ((at[axis] & 1) == 1) {
-                        int[] st = steps[axis];
-                        builder.relate(builder.element(label(s, x - st[0], y - st[1], z - st[2])), cell, 0);
-                        builder.relate(builder.element(label(s, x + st[0], y + st[1], z + st[2])), cell, 0);
-                    }
-                }
-            });
-            return builder.build();
-        } catch (IOException | OrderCycleException e) {
-            throw new IllegalStateException("face relations of a cubical complex are acyclic", e);
-        }
-    }
-
-    private static String label(StringBuilder s, int x, int y, int z) {
-        s.setLength(0);
-        name(s, x, y, z);
-        return s.toString();
-    }
-
-    private interface CellVisitor {
-        void visit(int x, int y, int z) throws IOException;
-    }
-
-    private void forEachCell(CellVisitor visitor) throws IOException {
-        int side = 2 * n + 1;
-        for (int dim = 0; dim <= 3; dim++) {
-            for (int x = 0; x < side; x++) {
-                for (int y = 0; y < side; y++) {
-                    for (int z = 0; z < side; z++) {
-                        if ((x & 1) + (y & 1) + (z & 1) == dim && present(x, y, z)) {
-                            visitor.visit(x, y, z);
-                        }
-                    }
-                }
-            }
-        }
-    }
-
-    private static void name(StringBuilder s, int x, int y, int z) {
-        s.append('c').append(x).append('.').append(y).append('.').append(z);
+        return CubicalFacePoset.toPoset(voxels);
     }
 }

@@ -1,5 +1,6 @@
 package dev.morse.homology;
 
+import dev.morse.progress.Progress;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
@@ -57,7 +58,10 @@ public final class DenseSmithNormalForm {
         }
         List<BigInteger> diagonal = new ArrayList<>();
         int t = 0;
+        Progress progress = Progress.current();
         while (t < rows && t < cols) {
+            // one pivot per step, against one column per column of the matrix in the phase's total
+            progress.advance(1);
             int[] pivot = smallestNonZero(a, t, rows, cols);
             if (pivot == null) {
                 break;

@@ -1,6 +1,7 @@
 package dev.morse.homology;
 
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.List;
@@ -37,7 +38,17 @@ public final class HomologyCalculator {
         for (int d = 0; d <= top; d++) {
             torsion.add(List.of());
         }
+        long columns = 0;
         for (int d = 1; d <= top; d++) {
+            columns += cellCounts[d];
+        }
+        Progress progress = Progress.current();
+        progress.begin("homology", "columns", columns);
+        long columnsDone = 0;
+        for (int d = 1; d <= top; d++) {
+            // the Smith normal form may report its own steps; the count is set right after each matrix
+            progress.reached(columnsDone);
+            columnsDone += cellCounts[d];
             SparseIntegerMatrix matrix = boundary.apply(d);
             switch (coefficients.ring()) {
                 case INTEGERS -> {

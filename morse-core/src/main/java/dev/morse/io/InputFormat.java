@@ -6,12 +6,20 @@ import java.io.Reader;
 import java.io.StringReader;
 import java.nio.file.Path;
 
-/** The text formats this program reads, told apart by the first word of their header line. */
+/**
+ * The formats this program reads. The two text formats are told apart by the first word of their
+ * header line; images and volumes are binary files recognised by {@code dev.morse.image.ImageInput}
+ * and have no header line of this kind.
+ */
 public enum InputFormat {
     /** {@code morse-poset 1}, read by {@link PosetReader}. */
     POSET(PosetReader.KIND, PosetReader.VERSION),
     /** {@code morse-simplicial 1}, read by {@link SimplicialReader}. */
-    SIMPLICIAL(SimplicialReader.KIND, SimplicialReader.VERSION);
+    SIMPLICIAL(SimplicialReader.KIND, SimplicialReader.VERSION),
+    /** A 2D image (Netpbm, PNG and the other formats of javax.imageio), read as its foreground pixels. */
+    IMAGE("image", ""),
+    /** A 3D volume (a stack of 2D slices, or raw bytes), read as its foreground voxels. */
+    VOLUME("volume", "");
 
     private static final int QUOTED_HEADER_LENGTH = 40;
 
@@ -23,14 +31,19 @@ public enum InputFormat {
         this.version = version;
     }
 
-    /** The header's first word. */
+    /** Whether this is a text format with a header line, as opposed to an image or volume. */
+    public boolean isText() {
+        return !version.isEmpty();
+    }
+
+    /** The header's first word; for images and volumes, just their name. */
     public String kind() {
         return kind;
     }
 
     /** The header line this program writes and expects, such as {@code morse-poset 1}. */
     public String header() {
-        return kind + " " + version;
+        return isText() ? kind + " " + version : kind;
     }
 
     /**
@@ -66,7 +79,7 @@ public enum InputFormat {
         }
         String first = ContentLines.words(header)[0];
         for (InputFormat format : values()) {
-            if (format.kind.equals(first)) {
+            if (format.isText() && format.kind.equals(first)) {
                 return format;
             }
         }

@@ -3,6 +3,7 @@ package dev.morse.io;
 import dev.morse.poset.OrderCycleException;
 import dev.morse.poset.Poset;
 import dev.morse.poset.PosetBuilder;
+import dev.morse.progress.Progress;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
@@ -21,6 +22,9 @@ public final class PosetReader {
     public static final String KIND = "morse-poset";
     /** The only version read. */
     public static final String VERSION = "1";
+
+    /** Lines between two progress reports, less one (a mask). */
+    static final int REPORT_EVERY = (1 << 12) - 1;
 
     private PosetReader() {
     }
@@ -47,9 +51,15 @@ public final class PosetReader {
         ContentLines lines = new ContentLines(buffered, source);
         lines.expectHeader(KIND, VERSION);
         PosetBuilder builder = new PosetBuilder();
+        Progress progress = Progress.current();
+        progress.begin("read", "lines", 0);
         for (String line = lines.next(); line != null; line = lines.next()) {
             readLine(line, lines, builder);
+            if ((lines.lineNumber() & REPORT_EVERY) == 0) {
+                progress.reached(lines.lineNumber());
+            }
         }
+        progress.begin("hasse diagram", "elements", builder.size());
         try {
             return builder.build();
         } catch (OrderCycleException e) {

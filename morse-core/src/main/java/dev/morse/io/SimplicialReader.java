@@ -1,6 +1,7 @@
 package dev.morse.io;
 
 import dev.morse.complex.Facets;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import it.unimi.dsi.fastutil.ints.IntOpenHashSet;
 import it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap;
@@ -53,7 +54,12 @@ public final class SimplicialReader {
         offsets.add(0);
         IntArrayList vertices = new IntArrayList();
         IntOpenHashSet inFace = new IntOpenHashSet();
+        Progress progress = Progress.current();
+        progress.begin("read", "lines", 0);
         for (String line = lines.next(); line != null; line = lines.next()) {
+            if ((lines.lineNumber() & PosetReader.REPORT_EVERY) == 0) {
+                progress.reached(lines.lineNumber());
+            }
             if (line.indexOf(':') >= 0) {
                 throw lines.error("stray ':': a face is a list of vertex labels");
             }

@@ -1,6 +1,7 @@
 package dev.morse.matching;
 
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayFIFOQueue;
 
 /**
@@ -32,11 +33,13 @@ public final class CollapseHeuristic implements MatchingHeuristic {
             }
         }
         int next = n - 1;
+        Progress progress = Progress.current();
+        int pairs = 0;
         while (true) {
             while (!queue.isEmpty()) {
                 int t = queue.dequeueInt();
-                if (state.isFree(t)) {
-                    state.collapse(t, queue::enqueue);
+                if (state.isFree(t) && state.collapse(t, queue::enqueue) && (++pairs & 0x7FF) == 0) {
+                    progress.reached(2L * pairs);
                 }
             }
             while (next >= 0 && state.isRemoved(next)) {

@@ -2,6 +2,7 @@ package dev.morse.matching;
 
 import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayFIFOQueue;
 import java.util.Arrays;
 
@@ -36,6 +37,8 @@ public final class CoreductionHeuristic implements MatchingHeuristic {
             facesLeft[c] = boundary.size(c);
         }
         IntArrayFIFOQueue queue = new IntArrayFIFOQueue();
+        Progress progress = Progress.current();
+        int pairs = 0;
         // cells are numbered by dimension, so the first cell left is one of lowest dimension
         for (int next = 0; next < n; next++) {
             if (removed[next]) {
@@ -58,6 +61,9 @@ public final class CoreductionHeuristic implements MatchingHeuristic {
                         mates[t] = s;
                         remove(s, removed, facesLeft, coboundary, queue);
                         remove(t, removed, facesLeft, coboundary, queue);
+                        if ((++pairs & 0x7FF) == 0) {
+                            progress.reached(2L * pairs);
+                        }
                     }
                 }
             }

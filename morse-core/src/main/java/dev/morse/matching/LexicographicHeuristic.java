@@ -2,6 +2,7 @@ package dev.morse.matching;
 
 import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import it.unimi.dsi.fastutil.ints.IntArrays;
 import java.util.Arrays;
@@ -42,7 +43,12 @@ public final class LexicographicHeuristic implements MatchingHeuristic {
         int[] search = {0};
         IntArrayList stack = new IntArrayList();
         IntArrayList candidates = new IntArrayList();
+        Progress progress = Progress.current();
+        int visited = 0;
         for (int c : order) {
+            if ((++visited & 0x3FF) == 0) {
+                progress.reached(visited);
+            }
             if (mates[c] != Matching.CRITICAL) {
                 continue;
             }

@@ -9,4 +9,12 @@ public interface MatchingHeuristic {
 
     /** Pairs cells of {@code complex}; the result must pass {@link MatchingVerifier}. */
     Matching match(ChainComplex complex, MatchingOptions options);
+
+    /**
+     * Whether the result depends on {@link MatchingOptions#seed()}, so that repeated seeded trials
+     * can give different matchings. False unless overridden.
+     */
+    default boolean randomized() {
+        return false;
+    }
 }

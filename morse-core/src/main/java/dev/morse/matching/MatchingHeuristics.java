@@ -22,8 +22,7 @@ public final class MatchingHeuristics {
     /** All heuristics by name, built-ins first. A fresh unmodifiable map each call. */
     public static Map<String, MatchingHeuristic> all() {
         Map<String, MatchingHeuristic> byName = new LinkedHashMap<>();
-        for (MatchingHeuristic h : List.of(new CoreductionHeuristic(), new CollapseHeuristic(),
-                new LexicographicHeuristic(), new RandomHeuristic(), new NoMatchingHeuristic())) {
+        for (MatchingHeuristic h : builtIn()) {
             byName.put(h.name(), h);
         }
         for (MatchingHeuristic h : ServiceLoader.load(MatchingHeuristic.class)) {
@@ -35,6 +34,16 @@ public final class MatchingHeuristics {
     /** The heuristic with this name, if any. */
     public static Optional<MatchingHeuristic> byName(String name) {
         return Optional.ofNullable(all().get(name));
+    }
+
+    /** The names of the heuristics that come with this library, in order; {@code none} is last. */
+    public static List<String> builtInNames() {
+        return builtIn().stream().map(MatchingHeuristic::name).toList();
+    }
+
+    private static List<MatchingHeuristic> builtIn() {
+        return List.of(new CoreductionHeuristic(), new CollapseHeuristic(), new LexicographicHeuristic(),
+                new RandomHeuristic(), new NoMatchingHeuristic());
     }
 
     /** The names on offer, in order. */

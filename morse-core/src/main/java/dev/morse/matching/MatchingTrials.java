@@ -1,6 +1,7 @@
 package dev.morse.matching;
 
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
@@ -26,7 +27,9 @@ public final class MatchingTrials {
             throw new IllegalArgumentException("at least one trial");
         }
         Map<List<Integer>, Integer> tally = new LinkedHashMap<>();
+        Progress progress = Progress.current();
         for (int t = 0; t < trials; t++) {
+            progress.begin("trial " + (t + 1) + " of " + trials, "cells", complex.cellCount());
             Matching matching = heuristic.match(complex, new MatchingOptions(seed + t));
             MatchingVerdict verdict = MatchingVerifier.verify(complex, matching);
             if (!verdict.valid()) {

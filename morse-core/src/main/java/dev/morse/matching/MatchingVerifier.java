@@ -2,6 +2,7 @@ package dev.morse.matching;
 
 import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 
 /**
  * Checks that a matching is a Morse matching (an acyclic matching with unit incidences, Forman 1998;
@@ -73,7 +74,12 @@ public final class MatchingVerifier {
                 queue[tail++] = c;
             }
         }
+        Progress progress = Progress.current();
+        progress.begin("verify", "cells", n);
         for (int head = 0; head < tail; head++) {
+            if ((head & 0xFFF) == 0) {
+                progress.reached(head);
+            }
             int c = queue[head];
             // out-edges of c: down to its faces unless the face is its partner; up to its partner if c is the lower one
             for (int i = boundary.start(c); i < boundary.end(c); i++) {

@@ -1,6 +1,7 @@
 package dev.morse.matching;
 
 import dev.morse.complex.ChainComplex;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import java.util.SplittableRandom;
 
@@ -19,6 +20,12 @@ public final class RandomHeuristic implements MatchingHeuristic {
         return "random";
     }
 
+    /** Each seed gives its own run. */
+    @Override
+    public boolean randomized() {
+        return true;
+    }
+
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
         SplittableRandom random = new SplittableRandom(options.seed());
@@ -32,14 +39,16 @@ public final class RandomHeuristic implements MatchingHeuristic {
         }
         int[] shuffled = shuffledByDimension(complex, random);
         int next = n - 1;
+        Progress progress = Progress.current();
+        int pairs = 0;
         while (true) {
             if (!freeFaces.isEmpty()) {
                 int pick = random.nextInt(freeFaces.size());
                 int t = freeFaces.getInt(pick);
                 freeFaces.set(pick, freeFaces.getInt(freeFaces.size() - 1));
                 freeFaces.removeInt(freeFaces.size() - 1);
-                if (state.isFree(t)) {
-                    state.collapse(t, freeFaces::add);
+                if (state.isFree(t) && state.collapse(t, freeFaces::add) && (++pairs & 0x7FF) == 0) {
+                    progress.reached(2L * pairs);
                 }
                 continue;
             }

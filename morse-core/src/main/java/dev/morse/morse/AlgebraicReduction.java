@@ -1,6 +1,7 @@
 package dev.morse.morse;
 
 import dev.morse.homology.SparseIntegerMatrix;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.Int2LongMap;
 import it.unimi.dsi.fastutil.ints.Int2LongOpenHashMap;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
@@ -75,7 +76,10 @@ public final class AlgebraicReduction {
     public static Result reduce(MorseComplex complex) {
         AlgebraicReduction state = new AlgebraicReduction(complex);
         List<ReductionRound> rounds = new ArrayList<>();
+        Progress progress = Progress.current();
+        progress.begin("reduce", "rounds", 0);
         for (int round = 1; ; round++) {
+            progress.reached(round - 1);
             int removed = state.runRound();
             if (removed == 0) {
                 break;

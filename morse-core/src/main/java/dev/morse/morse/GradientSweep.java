@@ -4,6 +4,7 @@ import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
 import dev.morse.homology.SparseIntegerMatrix;
 import dev.morse.matching.Matching;
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.Int2LongOpenHashMap;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import it.unimi.dsi.fastutil.ints.IntHeapPriorityQueue;
@@ -50,6 +51,12 @@ public final class GradientSweep {
             }
         }
         Boundary boundary = complex.boundary();
+        long swept = 0;
+        for (int d = 1; d <= top; d++) {
+            swept += counts[d];
+        }
+        Progress progress = Progress.current();
+        progress.begin("sweep", "critical cells", swept);
         for (int d = 1; d <= top; d++) {
             FlowOrder flow = flowOrder(complex, matching, boundary, d - 1);
             int[] critical = matching.criticalCells(complex, d);
@@ -59,6 +66,9 @@ public final class GradientSweep {
             Int2LongOpenHashMap chain = new Int2LongOpenHashMap();
             IntHeapPriorityQueue pending = new IntHeapPriorityQueue();
             for (int j = 0; j < critical.length; j++) {
+                if ((j & 0x3F) == 0) {
+                    progress.advance(Math.min(0x40, critical.length - j));
+                }
                 sweep(critical[j], boundary, matching, flow, chain, pending);
                 int[] faces = chain.keySet().toIntArray();
                 Arrays.sort(faces); // critical indices follow cell order, so the column comes out sorted

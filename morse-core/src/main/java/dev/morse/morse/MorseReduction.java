@@ -11,6 +11,7 @@ import dev.morse.matching.MatchingOptions;
 import dev.morse.matching.MatchingVerdict;
 import dev.morse.matching.MatchingVerifier;
 import dev.morse.matching.NoMatchingHeuristic;
+import dev.morse.progress.Progress;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -83,6 +84,7 @@ public final class MorseReduction {
     /** Runs the reduction on {@code complex}. */
     public static Outcome run(ChainComplex complex, Request request) {
         Map<String, Double> times = new LinkedHashMap<>();
+        Progress.current().begin("match", "cells", complex.cellCount());
         long t0 = System.nanoTime();
         Matching matching = request.heuristic().match(complex, request.options());
         long t1 = System.nanoTime();

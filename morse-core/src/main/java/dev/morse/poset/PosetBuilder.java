@@ -1,5 +1,6 @@
 package dev.morse.poset;
 
+import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap;
 import java.util.ArrayList;
@@ -194,7 +195,11 @@ public final class PosetBuilder {
         int[] stamp = new int[n];
         Arrays.fill(stamp, -1);
         IntArrayList stack = new IntArrayList();
+        Progress progress = Progress.current();
         for (int y = 0; y < n; y++) {
+            if ((y & 0xFFF) == 0) {
+                progress.reached(y);
+            }
             int s = below.start(y);
             int e = below.end(y);
             int minHeight = Integer.MAX_VALUE;

@@ -8,6 +8,7 @@ import dev.morse.io.InputFormat;
 import dev.morse.matching.TrialCount;
 import dev.morse.morse.MorseReduction;
 import dev.morse.morse.ReductionRound;
+import dev.morse.reduction.ReductionStats;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -31,6 +32,9 @@ import java.util.Optional;
  *     unreduced homology (Forman 1998)
  * @param trials the spread of critical-cell vectors over repeated seeded runs of the matching (empty
  *     when only one run was asked for)
+ * @param posetReduction what the homology-preserving reduction of the poset did, when one ran
+ *     (the order complex was then built on the reduced poset)
+ * @param image the image or volume the cubical complex was built from, for image input
  * @param engine whether the cells were stored or, for the order complex, generated on demand
  */
 public record HomologyReport(
@@ -46,6 +50,8 @@ public record HomologyReport(
         List<ReductionRound> rounds,
         long morseLowerBound,
         List<TrialCount> trials,
+        Optional<ReductionStats> posetReduction,
+        Optional<ImageFacts> image,
         ComplexEngine engine) {
 
     /** Validates and copies. */
@@ -57,6 +63,8 @@ public record HomologyReport(
         Objects.requireNonNull(homology, "homology");
         Objects.requireNonNull(cwCheck, "cwCheck");
         Objects.requireNonNull(engine, "engine");
+        Objects.requireNonNull(posetReduction, "posetReduction");
+        Objects.requireNonNull(image, "image");
         cells = List.copyOf(cells);
         critical = List.copyOf(critical);
         timings = List.copyOf(timings);
@@ -78,9 +86,18 @@ public record HomologyReport(
     /** A report of a run whose cells were all stored. */
     public HomologyReport(String input, InputFormat format, ComplexKind complex, List<Long> cells, String matching,
             List<Integer> critical, Homology homology, Optional<CwPosetVerdict> cwCheck, List<PhaseTiming> timings,
+            List<ReductionRound> rounds, long morseLowerBound, List<TrialCount> trials,
+            Optional<ReductionStats> posetReduction, Optional<ImageFacts> image) {
+        this(input, format, complex, cells, matching, critical, homology, cwCheck, timings, rounds, morseLowerBound,
+                trials, posetReduction, image, ComplexEngine.STORED);
+    }
+
+    /** A report of a run whose cells were all stored, on an input neither reduced as a poset nor read as an image. */
+    public HomologyReport(String input, InputFormat format, ComplexKind complex, List<Long> cells, String matching,
+            List<Integer> critical, Homology homology, Optional<CwPosetVerdict> cwCheck, List<PhaseTiming> timings,
             List<ReductionRound> rounds, long morseLowerBound, List<TrialCount> trials) {
         this(input, format, complex, cells, matching, critical, homology, cwCheck, timings, rounds, morseLowerBound,
-                trials, ComplexEngine.STORED);
+                trials, Optional.empty(), Optional.empty(), ComplexEngine.STORED);
     }
 
     /**
@@ -90,7 +107,7 @@ public record HomologyReport(
     public HomologyReport(String input, InputFormat format, ComplexKind complex, List<Long> cells, String matching,
             List<Integer> critical, Homology homology, Optional<CwPosetVerdict> cwCheck, List<PhaseTiming> timings) {
         this(input, format, complex, cells, matching, critical, homology, cwCheck, timings, List.of(),
-                MorseReduction.lowerBound(homology), List.of(), ComplexEngine.STORED);
+                MorseReduction.lowerBound(homology), List.of(), Optional.empty(), Optional.empty(), ComplexEngine.STORED);
     }
 
     /** Critical cells beyond the Morse lower bound. */

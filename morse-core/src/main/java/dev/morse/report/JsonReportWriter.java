@@ -2,9 +2,7 @@ package dev.morse.report;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
-import com.fasterxml.jackson.core.util.Separators;
 import dev.morse.complex.CwPosetVerdict;
 import dev.morse.homology.HomologyGroup;
 import java.io.IOException;
@@ -16,7 +14,10 @@ import java.math.BigInteger;
 import java.math.RoundingMode;
 import dev.morse.matching.TrialCount;
 import dev.morse.morse.ReductionRound;
+import dev.morse.io.InputFormat;
+import dev.morse.reduction.ReductionStats;
 import java.util.List;
+import java.util.Optional;
 
 /**
  * Writes a {@link HomologyReport} as one JSON object with the fields fixed by the design
@@ -25,11 +26,15 @@ import java.util.List;
  * {@code cw_check} ({@code {"cw_poset": bool}}, with {@code "reason": text} when the check gave
  * one, or {@code null} when no check was made), {@code morse_lower_bound} and {@code excess} (critical
  * cells beyond it), {@code rounds} (cells left after each algebraic reduction round), {@code trials}
- * (critical vectors and how often each occurred, when several seeded runs were asked for) and
- * {@code timings_ms} (phase name to milliseconds). {@code engine} says whether the cells were stored
- * ({@code explicit}) or, for an order complex, generated on demand ({@code implicit}), with
- * {@code engine_reason} when the choice was automatic and, for the implicit engine, {@code implicit}:
- * its element order and what its walk over maximal chains did. Torsion factors are JSON integers of
+ * (critical vectors and how often each occurred, when several seeded runs were asked for),
+ * {@code engine} (whether the cells were stored, {@code explicit}, or, for an order complex,
+ * generated on demand, {@code implicit}), {@code engine_reason} when the choice was automatic and,
+ * for the implicit engine, {@code implicit} (its element order and what its walk over maximal chains
+ * did),
+ * {@code poset_reduction} (for a poset: what the reduction before the order complex removed, or
+ * {@code null} when none ran), {@code image} (for an image or volume: its size, threshold,
+ * foreground, and components, tunnels and cavities) and {@code timings_ms} (phase name to
+ * milliseconds). Torsion factors are JSON integers of
  * any size. Streams through Jackson's {@link JsonGenerator}; holds nothing.
  */
 public final class JsonReportWriter {
@@ -74,6 +79,12 @@ public final class JsonReportWriter {
             }
             writeCwCheck(json, report);
             writeEngine(json, report.engine());
+            if (report.format() == InputFormat.POSET) {
+                writePosetReduction(json, report.posetReduction());
+            }
+            if (report.image().isPresent()) {
+                writeImage(json, report.image().get());
+            }
             writeTimings(json, report.timings());
             json.writeEndObject();
         }
@@ -82,15 +93,7 @@ public final class JsonReportWriter {
     }
 
     private static DefaultPrettyPrinter prettyPrinter() {
-        Separators separators = Separators.createDefaultInstance()
-                .withObjectFieldValueSpacing(Separators.Spacing.AFTER)
-                .withArrayEmptySeparator("")
-                .withObjectEmptySeparator("");
-        DefaultPrettyPrinter printer = new DefaultPrettyPrinter(separators);
-        // objects one field per line; arrays stay on one line, where cell counts read best
-        printer.indentObjectsWith(new DefaultIndenter("  ", "\n"));
-        printer.indentArraysWith(DefaultPrettyPrinter.FixedSpaceIndenter.instance);
-        return printer;
+        return JsonStyle.prettyPrinter();
     }
 
     private static void writeIntArray(JsonGenerator json, String field, List<? extends Number> values) throws IOException {
@@ -101,7 +104,7 @@ public final class JsonReportWriter {
         json.writeEndArray();
     }
 
-    private static void writeHomology(JsonGenerator json, List<HomologyGroup> groups) throws IOException {
+    static void writeHomology(JsonGenerator json, List<HomologyGroup> groups) throws IOException {
         json.writeArrayFieldStart("homology");
         for (HomologyGroup group : groups) {
             json.writeStartObject();
@@ -133,7 +136,7 @@ public final class JsonReportWriter {
         json.writeEndArray();
     }
 
-    private static void writeTrials(JsonGenerator json, List<TrialCount> trials) throws IOException {
+    static void writeTrials(JsonGenerator json, List<TrialCount> trials) throws IOException {
         json.writeArrayFieldStart("trials");
         for (TrialCount trial : trials) {
             json.writeStartObject();
@@ -173,6 +176,37 @@ public final class JsonReportWriter {
             json.writeNumberField("defective_fibres", run.search().defectiveFacets());
             json.writeEndObject();
         }
+    }
+
+    private static void writePosetReduction(JsonGenerator json, Optional<ReductionStats> stats) throws IOException {
+        json.writeFieldName("poset_reduction");
+        if (stats.isEmpty()) {
+            json.writeNull();
+            return;
+        }
+        ReductionStats s = stats.get();
+        json.writeStartObject();
+        json.writeNumberField("beat_points_removed", s.beatPointsRemoved());
+        json.writeNumberField("acyclic_links_removed", s.acyclicLinksRemoved());
+        json.writeNumberField("links_skipped", s.linksSkipped());
+        json.writeNumberField("elements_before", s.elementsBefore());
+        json.writeNumberField("elements_after", s.elementsAfter());
+        json.writeFieldName("ms");
+        json.writeNumber(BigDecimal.valueOf(s.milliseconds()).setScale(TIMING_DECIMALS, RoundingMode.HALF_UP));
+        json.writeEndObject();
+    }
+
+    private static void writeImage(JsonGenerator json, ImageFacts image) throws IOException {
+        json.writeObjectFieldStart("image");
+        writeIntArray(json, "size", image.size());
+        json.writeNumberField("slices", image.slices());
+        json.writeNumberField("foreground", image.foreground());
+        json.writeNumberField("threshold", image.threshold());
+        json.writeBooleanField("inverted", image.inverted());
+        json.writeNumberField("components", image.components());
+        json.writeNumberField("tunnels", image.tunnels());
+        json.writeNumberField("cavities", image.cavities());
+        json.writeEndObject();
     }
 
     private static void writeTimings(JsonGenerator json, List<PhaseTiming> timings) throws IOException {

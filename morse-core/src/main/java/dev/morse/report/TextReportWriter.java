@@ -6,6 +6,7 @@ import dev.morse.io.InputFormat;
 import java.math.BigInteger;
 import dev.morse.matching.TrialCount;
 import dev.morse.morse.ReductionRound;
+import dev.morse.reduction.ReductionStats;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
@@ -33,6 +34,11 @@ public final class TextReportWriter {
         if (choice != null) {
             row(text, "why", choice);
         }
+        report.image().ifPresent(image -> {
+            row(text, "image", imageLine(image));
+            row(text, "shape", shapeLine(image));
+        });
+        report.posetReduction().ifPresent(stats -> row(text, "reduction", reductionLine(stats)));
         row(text, "cells", countsLine(report.cells()));
         row(text, "matching", matchingLine(report));
         report.engine().implicit().ifPresent(run -> row(text, "walk", walkLine(run)));
@@ -87,6 +93,7 @@ public final class TextReportWriter {
                     ? "order complex, one simplex per chain of the poset, chains generated on demand (implicit engine)"
                     : "order complex, one simplex per chain of the poset";
             case SIMPLICIAL -> "simplicial, all faces of the listed faces";
+            case CUBICAL -> "cubical, one cell per elementary cube of the foreground";
         };
     }
 
@@ -99,6 +106,38 @@ public final class TextReportWriter {
                 .map(v -> v.isCwPoset() ? "the poset is a CW poset" : "not a CW poset: " + v.reason())
                 .orElse("chosen without checking for a CW poset");
         return report.engine().reason().isEmpty() ? cw : cw + "; " + report.engine().reason();
+    }
+
+    private static String imageLine(ImageFacts image) {
+        StringJoiner size = new StringJoiner(" x ");
+        image.size().forEach(n -> size.add(Integer.toString(n)));
+        String unit = image.isVolume() ? "voxels" : "pixels";
+        return String.format(Locale.ROOT, "%s %s%s, foreground %d (samples %s %d)", size, unit,
+                image.slices() > 1 ? " from " + image.slices() + " slices" : "", image.foreground(),
+                image.inverted() ? "below" : "at or above", image.threshold());
+    }
+
+    /** β_0, β_1 and β_2 in the words of imaging. */
+    private static String shapeLine(ImageFacts image) {
+        String shape = plural(image.components(), "component") + ", "
+                + plural(image.tunnels(), image.isVolume() ? "tunnel" : "hole");
+        return image.isVolume() ? shape + ", " + plural(image.cavities(), "cavity", "cavities") : shape;
+    }
+
+    private static String plural(int count, String one) {
+        return plural(count, one, one + "s");
+    }
+
+    private static String plural(int count, String one, String many) {
+        return count + " " + (count == 1 ? one : many);
+    }
+
+    private static String reductionLine(ReductionStats stats) {
+        return String.format(Locale.ROOT, "%d -> %d elements before the order complex: %s, %s removed%s, %.2f ms",
+                stats.elementsBefore(), stats.elementsAfter(), plural(stats.beatPointsRemoved(), "beat point"),
+                plural(stats.acyclicLinksRemoved(), "acyclic link"),
+                stats.linksSkipped() > 0 ? " (" + stats.linksSkipped() + " links too large to test)" : "",
+                stats.milliseconds());
     }
 
     private static String countsLine(List<? extends Number> counts) {

@@ -187,8 +187,9 @@ class GeneratorsTest {
     }
 
     @Test
-    void subspaceLatticeRejectsNonPrimeFields() {
-        assertThrows(IllegalArgumentException.class, () -> SubspaceLattice.lattice(4, 2));
+    void subspaceLatticeRejectsOrdersWithoutAField() {
+        // F_6 does not exist: 6 is not a prime power (common practice)
+        assertThrows(IllegalArgumentException.class, () -> SubspaceLattice.lattice(6, 2));
     }
 
     // ---- Boolean and divisor lattices ----

@@ -111,7 +111,8 @@ class HomologyPipelineTest {
         Path missing = dir.resolve("missing.poset");
         assertEquals(missing + ": no such file",
                 assertThrows(InputException.class, () -> HomologyPipeline.run(missing, DEFAULTS)).getMessage());
-        assertEquals(dir + ": is a directory, not a file",
+        // a directory is read as the slices of a volume; this one has none
+        assertEquals(dir + ": is a directory with no image files to read as the slices of a volume",
                 assertThrows(InputException.class, () -> HomologyPipeline.run(dir, DEFAULTS)).getMessage());
     }
 

@@ -1,0 +1,125 @@
+package dev.morse.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.math.BigInteger;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import javax.xml.parsers.DocumentBuilderFactory;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.w3c.dom.Document;
+import org.w3c.dom.Element;
+import org.w3c.dom.NodeList;
+
+class CompareCommandTest {
+    @TempDir
+    Path dir;
+
+    @SuppressWarnings("unchecked")
+    private static Map<String, Object> json(String... args) {
+        CliRun run = CliRun.morse(args);
+        assertEquals(0, run.code(), run.err());
+        assertEquals("", run.err());
+        return (Map<String, Object>) JsonValues.parse(run.out());
+    }
+
+    @SuppressWarnings("unchecked")
+    private static List<Map<String, Object>> matchings(Map<String, Object> json) {
+        return (List<Map<String, Object>>) json.get("matchings");
+    }
+
+    @Test
+    void tableHasOneRowPerDefaultMatching() throws IOException {
+        String file = Inputs.write(dir, "rp2.simplicial", Inputs.RP2);
+        CliRun run = CliRun.morse("compare", file);
+        assertEquals(0, run.code(), run.err());
+        List<String> lines = run.out().lines().toList();
+        assertEquals(file + " (simplicial file)", lines.get(0));
+        // H_1(RP^2) = Z/2, and Forman's bound is 1 + 1 + 1 (β_0; t_1; t_1 again in dimension 2)
+        assertEquals("  homology  H_0 = Z, H_1 = Z/2, H_2 = 0 (by coreduction; every matching agrees)", lines.get(3));
+        assertEquals("  bound     Morse lower bound 3 = 1 + 1 + 1 in dimensions 0..2", lines.get(4));
+        assertTrue(lines.get(6).matches("  matching +critical +total +excess +match +verify +sweep +reduce +homology +all"
+                + " +peak heap"), lines.get(6));
+        List<String> names = lines.subList(7, 11).stream().map(l -> l.strip().split(" +")[0]).toList();
+        assertEquals(List.of("coreduction", "collapse", "lexicographic", "random"), names);
+    }
+
+    @Test
+    void jsonListsTheMatchingsAskedForInOrderWithTheBaselineWhenNamed() throws IOException {
+        String file = Inputs.write(dir, "rp2.simplicial", Inputs.RP2);
+        Map<String, Object> json = json("compare", file, "--matching", "none,collapse", "--json");
+        assertEquals("none", json.get("reference_matching"));
+        assertEquals(BigInteger.valueOf(3), json.get("morse_lower_bound"));
+        List<Map<String, Object>> runs = matchings(json);
+        assertEquals(List.of("none", "collapse"), runs.stream().map(r -> r.get("matching")).toList());
+        // without a matching every cell is critical: 6 + 15 + 10, excess 31 - 3
+        assertEquals(List.of(BigInteger.valueOf(6), BigInteger.valueOf(15), BigInteger.TEN), runs.get(0).get("critical"));
+        assertEquals(BigInteger.valueOf(28), runs.get(0).get("excess"));
+        assertTrue(((BigInteger) runs.get(1).get("peak_heap_bytes")).signum() > 0);
+        assertFalse(runs.get(1).containsKey("trials"));
+    }
+
+    @Test
+    @SuppressWarnings("unchecked")
+    void trialsOfTheRandomMatchingAddUpToTheNumberAsked() throws IOException {
+        String file = Inputs.write(dir, "rp2.simplicial", Inputs.RP2);
+        Map<String, Object> json = json("compare", file, "--matching", "coreduction,random", "--trials", "30", "--json");
+        List<Map<String, Object>> trials = (List<Map<String, Object>>) matchings(json).get(1).get("trials");
+        assertEquals(BigInteger.valueOf(30), trials.stream().map(t -> (BigInteger) t.get("count"))
+                .reduce(BigInteger.ZERO, BigInteger::add));
+        assertFalse(matchings(json).get(0).containsKey("trials"), "coreduction does not depend on the seed");
+    }
+
+    @Test
+    void plotHasABarPerMatchingAndDimensionAndTheBoundsMarked() throws Exception {
+        String file = Inputs.write(dir, "square.poset", Inputs.SQUARE);
+        Path svg = dir.resolve("square.svg");
+        CliRun run = CliRun.morse("compare", file, "--plot", svg.toString());
+        assertEquals(0, run.code(), run.err());
+        DocumentBuilderFactory factory = DocumentBuilderFactory.newInstance();
+        Document doc = factory.newDocumentBuilder().parse(svg.toFile());
+        NodeList rects = doc.getElementsByTagName("rect");
+        int bars = 0;
+        for (int i = 0; i < rects.getLength(); i++) {
+            bars += ((Element) rects.item(i)).getAttribute("class").equals("bar") ? 1 : 0;
+        }
+        // 4 default matchings, 3 dimensions of the square's cellular complex
+        assertEquals(12, bars);
+        NodeList lines = doc.getElementsByTagName("line");
+        StringBuilder bounds = new StringBuilder();
+        for (int i = 0; i < lines.getLength(); i++) {
+            Element line = (Element) lines.item(i);
+            if (line.getAttribute("class").equals("bound")) {
+                bounds.append(line.getAttribute("data-value"));
+            }
+        }
+        // a disk: β = 1, 0, 0 and no torsion
+        assertEquals("100", bounds.toString());
+    }
+
+    @Test
+    void unknownMatchingInTheListIsAnOptionError() throws IOException {
+        String file = Inputs.write(dir, "square.poset", Inputs.SQUARE);
+        CliRun run = CliRun.morse("compare", file, "--matching", "coreduction,steepest");
+        assertEquals(2, run.code());
+        assertEquals("", run.out());
+        assertTrue(run.errLines().get(0).contains("unknown matching 'steepest'"), run.err());
+    }
+
+    @Test
+    void aPlotThatCannotBeWrittenIsAnErrorAndNothingIsPrinted() throws IOException {
+        String file = Inputs.write(dir, "square.poset", Inputs.SQUARE);
+        Path plot = dir.resolve("no-such-dir").resolve("chart.svg");
+        CliRun run = CliRun.morse("compare", file, "--plot", plot.toString());
+        assertEquals(2, run.code());
+        assertEquals("", run.out());
+        assertEquals(List.of(plot + ": cannot be written: no such directory"), run.errLines());
+        assertFalse(Files.exists(plot));
+    }
+}

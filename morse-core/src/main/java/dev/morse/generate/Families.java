@@ -1,0 +1,131 @@
+package dev.morse.generate;
+
+import dev.morse.image.VoxelSet;
+import dev.morse.poset.Poset;
+
+/**
+ * The generated families as the command line offers them, each with the variants that make sense
+ * for it: whole lattices or their proper parts, boundaries, closed balls or face lattices of
+ * polytopes. Every method checks its arguments and throws {@link IllegalArgumentException} with a
+ * message fit for users.
+ */
+public final class Families {
+    private Families() {
+    }
+
+    /** The Boolean lattice {@code B_n}, or its proper part (the boundary of the (n-1)-simplex). */
+    public static Generated booleanLattice(int n, boolean proper) {
+        Poset p = proper ? BooleanLattice.properPart(n) : BooleanLattice.lattice(n);
+        return new Generated.OfPoset(p, "the Boolean lattice B_" + n + part(proper));
+    }
+
+    /** Faces of the d-simplex. */
+    public static Generated simplex(int d, FacePart part) {
+        Poset p = switch (part) {
+            case BOUNDARY -> SimplexFaces.boundaryFacePoset(d);
+            case CLOSED -> SimplexFaces.closedFacePoset(d);
+            case LATTICE -> SimplexFaces.faceLattice(d);
+        };
+        return new Generated.OfPoset(p, faces(part) + "the " + d + "-simplex");
+    }
+
+    /** Faces of the d-cube. */
+    public static Generated cube(int d, FacePart part) {
+        Poset p = switch (part) {
+            case BOUNDARY -> CubeFaces.boundaryFacePoset(d);
+            case CLOSED -> CubeFaces.closedFacePoset(d);
+            case LATTICE -> CubeFaces.faceLattice(d);
+        };
+        return new Generated.OfPoset(p, faces(part) + "the " + d + "-cube");
+    }
+
+    /** Faces of the d-dimensional cross-polytope. */
+    public static Generated crossPolytope(int d, FacePart part) {
+        Poset p = switch (part) {
+            case BOUNDARY -> CrossPolytopeFaces.boundaryFacePoset(d);
+            case CLOSED -> CrossPolytopeFaces.closedFacePoset(d);
+            case LATTICE -> CrossPolytopeFaces.faceLattice(d);
+        };
+        return new Generated.OfPoset(p, faces(part) + "the " + d + "-dimensional cross-polytope");
+    }
+
+    /** The partition lattice {@code Π_n}, or its proper part. */
+    public static Generated partitionLattice(int n, boolean proper) {
+        Poset p = proper ? PartitionLattice.properPart(n) : PartitionLattice.lattice(n);
+        return new Generated.OfPoset(p, "the partition lattice Pi_" + n + part(proper));
+    }
+
+    /** The noncrossing partition lattice {@code NC_n}, or its proper part. */
+    public static Generated noncrossingPartitionLattice(int n, boolean proper) {
+        Poset p = proper ? NoncrossingPartitionLattice.properPart(n) : NoncrossingPartitionLattice.lattice(n);
+        return new Generated.OfPoset(p, "the noncrossing partition lattice NC_" + n + part(proper));
+    }
+
+    /** The subspaces of {@code F_q^n}, or its proper part. */
+    public static Generated subspaceLattice(int q, int n, boolean proper) {
+        Poset p = proper ? SubspaceLattice.properPart(q, n) : SubspaceLattice.lattice(q, n);
+        return new Generated.OfPoset(p, "the subspace lattice of F_" + q + "^" + n + part(proper));
+    }
+
+    /** The divisors of N, or the open interval (1, N). */
+    public static Generated divisorLattice(int n, boolean proper) {
+        Poset p = proper ? DivisorLattice.openInterval(n) : DivisorLattice.lattice(n);
+        return new Generated.OfPoset(p, proper ? "the open interval (1, " + n + ") of the divisor lattice"
+                : "the divisor lattice of " + n);
+    }
+
+    /** The real projective space {@code RP^d} as the antipodal quotient of the boundary of the (d+1)-cube. */
+    public static Generated projectiveSpace(int d) {
+        return new Generated.OfPoset(ProjectiveSpace.antipodalCubeQuotient(d), "the real projective space RP^" + d
+                + ", the boundary of the " + (d + 1) + "-cube modulo the antipodal map");
+    }
+
+    /** The matching complex of {@code K_n}. */
+    public static Generated matchingComplex(int n) {
+        return new Generated.OfFacets(MatchingComplex.facets(n), "the matching complex of K_" + n);
+    }
+
+    /** The chessboard complex of the {@code m × n} board. */
+    public static Generated chessboardComplex(int m, int n) {
+        return new Generated.OfFacets(ChessboardComplex.facets(m, n), "the chessboard complex of the " + m + "x" + n
+                + " board");
+    }
+
+    /** A solid block with straight tunnels and sealed cavities ({@link VoxelBlock}). */
+    public static Generated voxelBlock(int side, int tunnels, int cavities) {
+        VoxelBlock block = VoxelBlock.of(side, tunnels, cavities);
+        return new Generated.OfVoxels(block.voxels(), "a " + side + "^3 voxel block with " + tunnels + " tunnels and "
+                + cavities + " cavities: H = Z, Z^" + tunnels + ", Z^" + cavities + ", 0");
+    }
+
+    /** A random set of pixels or voxels in a box of two or three axes. */
+    public static Generated randomVoxels(int[] extents, double density, long seed) {
+        if (extents.length < 2 || extents.length > 3) {
+            throw new IllegalArgumentException("give two or three sizes, not " + extents.length);
+        }
+        VoxelSet voxels = RandomVoxels.of(extents, density, seed);
+        StringBuilder box = new StringBuilder();
+        for (int e : extents) {
+            box.append(box.length() > 0 ? "x" : "").append(e);
+        }
+        return new Generated.OfVoxels(voxels, "random voxels in a " + box + " box, density " + density + ", seed " + seed);
+    }
+
+    /** A random poset ({@link RandomPoset}). */
+    public static Generated randomPoset(int n, double density, long seed) {
+        return new Generated.OfPoset(RandomPoset.of(n, density, seed), "a random poset of " + n
+                + " elements, pairs related with probability " + density + ", seed " + seed);
+    }
+
+    private static String part(boolean proper) {
+        return proper ? ", proper part" : "";
+    }
+
+    private static String faces(FacePart part) {
+        return switch (part) {
+            case BOUNDARY -> "nonempty proper faces of ";
+            case CLOSED -> "nonempty faces of ";
+            case LATTICE -> "all faces of ";
+        };
+    }
+}

@@ -1,0 +1,42 @@
+package dev.morse.io;
+
+import dev.morse.poset.Poset;
+import java.io.IOException;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+
+/** Reading one input file of a known kind, with every failure of the file itself an {@link InputException}. */
+public final class InputFiles {
+    private InputFiles() {
+    }
+
+    /**
+     * Reads a poset file.
+     *
+     * @throws InputException when the file is missing, unreadable, a directory, not in the poset
+     *     format, or malformed
+     */
+    public static Poset readPoset(Path file) throws IOException {
+        String source = file.toString();
+        if (!Files.exists(file)) {
+            throw new InputException(source, InputException.NO_LINE, "no such file");
+        }
+        if (Files.isDirectory(file)) {
+            throw new InputException(source, InputException.NO_LINE, "is a directory, not a file");
+        }
+        try {
+            InputFormat format = InputFormat.detect(file);
+            if (format != InputFormat.POSET) {
+                throw new InputException(source, InputException.NO_LINE, "a poset file (" + InputFormat.POSET.header()
+                        + ") is needed here, not a " + format.kind() + " file");
+            }
+            return PosetReader.read(file);
+        } catch (NoSuchFileException e) {
+            throw new InputException(source, InputException.NO_LINE, "no such file");
+        } catch (AccessDeniedException e) {
+            throw new InputException(source, InputException.NO_LINE, "cannot be read: permission denied");
+        }
+    }
+}

@@ -1,0 +1,83 @@
+package dev.morse.report;
+
+import com.fasterxml.jackson.core.JsonGenerator;
+import dev.morse.complex.CwPosetVerdict;
+import java.io.IOException;
+import java.util.Locale;
+
+/**
+ * Writes a {@link ComparisonReport} as one JSON object: {@code input}, {@code format},
+ * {@code complex}, {@code cells}, {@code cw_check} (as in homology reports), {@code coefficients}
+ * (always {@code "Z"}), {@code homology}, {@code reference_matching} (whose run gave it),
+ * {@code morse_lower_bound}, {@code lower_bound_by_dimension}, {@code seed}, {@code timings_ms}
+ * ({@code read}, {@code complex}) and {@code matchings}: one object per heuristic with
+ * {@code matching}, {@code critical}, {@code total}, {@code excess}, {@code timings_ms},
+ * {@code peak_heap_bytes} (approximate; -1 when unknown) and, for randomized heuristics run several
+ * times, {@code trials} (each critical vector with its {@code count}).
+ */
+public final class ComparisonJsonWriter {
+    private ComparisonJsonWriter() {
+    }
+
+    /** The report as indented JSON text ending with a newline. */
+    public static String toJson(ComparisonReport report) {
+        return JsonStyle.toText(json -> {
+            json.writeStartObject();
+            json.writeStringField("input", report.input());
+            json.writeStringField("format", report.format().name().toLowerCase(Locale.ROOT));
+            json.writeStringField("complex", report.complex().reportName());
+            JsonStyle.intArray(json, "cells", report.cells());
+            writeCwCheck(json, report);
+            json.writeStringField("coefficients", "Z");
+            JsonReportWriter.writeHomology(json, report.homology().groups());
+            json.writeStringField("reference_matching", report.referenceMatching());
+            json.writeNumberField("morse_lower_bound", report.morseLowerBound());
+            JsonStyle.intArray(json, "lower_bound_by_dimension", report.boundByDimension());
+            json.writeNumberField("seed", report.seed());
+            json.writeObjectFieldStart("timings_ms");
+            for (PhaseTiming t : report.setup()) {
+                JsonStyle.millis(json, t.phase(), t.milliseconds());
+            }
+            json.writeEndObject();
+            json.writeArrayFieldStart("matchings");
+            for (MatchingRun run : report.runs()) {
+                writeRun(json, report, run);
+            }
+            json.writeEndArray();
+            json.writeEndObject();
+        });
+    }
+
+    private static void writeRun(JsonGenerator json, ComparisonReport report, MatchingRun run) throws IOException {
+        json.writeStartObject();
+        json.writeStringField("matching", run.matching());
+        JsonStyle.intArray(json, "critical", run.critical());
+        json.writeNumberField("total", run.totalCritical());
+        json.writeNumberField("excess", report.excess(run));
+        json.writeObjectFieldStart("timings_ms");
+        for (PhaseTiming t : run.timings()) {
+            JsonStyle.millis(json, t.phase(), t.milliseconds());
+        }
+        json.writeEndObject();
+        json.writeNumberField("peak_heap_bytes", run.peakHeapBytes());
+        if (!run.trials().isEmpty()) {
+            JsonReportWriter.writeTrials(json, run.trials());
+        }
+        json.writeEndObject();
+    }
+
+    private static void writeCwCheck(JsonGenerator json, ComparisonReport report) throws IOException {
+        json.writeFieldName("cw_check");
+        if (report.cwCheck().isEmpty()) {
+            json.writeNull();
+            return;
+        }
+        CwPosetVerdict verdict = report.cwCheck().get();
+        json.writeStartObject();
+        json.writeBooleanField("cw_poset", verdict.isCwPoset());
+        if (!verdict.isCwPoset()) {
+            json.writeStringField("reason", verdict.reason());
+        }
+        json.writeEndObject();
+    }
+}

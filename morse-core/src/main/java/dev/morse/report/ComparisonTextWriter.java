@@ -1,0 +1,122 @@
+package dev.morse.report;
+
+import dev.morse.homology.Coefficients;
+import dev.morse.homology.HomologyGroup;
+import dev.morse.matching.TrialCount;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.StringJoiner;
+
+/**
+ * Writes a {@link ComparisonReport} for people: the complex and its homology, then one table row
+ * per heuristic with its critical cells per dimension, total, excess over the Morse lower bound,
+ * milliseconds per phase and approximate peak heap, then the tallies of repeated trials.
+ */
+public final class ComparisonTextWriter {
+    private static final String ROW = "  %-10s%s\n";
+    private static final List<String> PHASES = List.of("match", "verify", "sweep", "reduce", "homology");
+    private static final double MIB = 1024.0 * 1024.0;
+
+    private ComparisonTextWriter() {
+    }
+
+    /** The report as lines of text, each ending with a newline. */
+    public static String toText(ComparisonReport report) {
+        StringBuilder text = new StringBuilder();
+        text.append(String.format(Locale.ROOT, "%s (%s file)\n", report.input(),
+                report.format().name().toLowerCase(Locale.ROOT)));
+        row(text, "complex", report.complex().reportName() + report.cwCheck()
+                .map(v -> v.isCwPoset() ? ", the poset is a CW poset" : ", not a CW poset: " + v.reason()).orElse(""));
+        row(text, "cells", counted(report.cells()));
+        row(text, "homology", homologyLine(report) + " (by " + report.referenceMatching()
+                + (report.runs().size() > 1 ? "; every matching agrees)" : ")"));
+        row(text, "bound", "Morse lower bound " + counted(report.boundByDimension()));
+        text.append('\n');
+        table(text, report);
+        for (MatchingRun run : report.runs()) {
+            if (!run.trials().isEmpty()) {
+                text.append(String.format(Locale.ROOT, "\n  %s, %d trials with seeds %d..%d:\n", run.matching(),
+                        run.trialCount(), report.seed(), report.seed() + run.trialCount() - 1));
+                for (TrialCount t : run.trials()) {
+                    text.append(String.format(Locale.ROOT, "    critical %-16s total %-8d %s\n",
+                            spaced(t.critical()), t.critical().stream().mapToLong(Integer::longValue).sum(),
+                            t.count() == 1 ? "once" : t.count() + " times"));
+                }
+            }
+        }
+        text.append("\n  Times are milliseconds. Peak heap is approximate: the sum of the heap pools' peaks while\n"
+                + "  the matching ran, the complex itself included.\n");
+        return text.toString();
+    }
+
+    private static void table(StringBuilder text, ComparisonReport report) {
+        List<String[]> rows = new ArrayList<>();
+        List<String> header = new ArrayList<>(List.of("matching", "critical", "total", "excess"));
+        header.addAll(PHASES);
+        header.add("all");
+        header.add("peak heap");
+        rows.add(header.toArray(new String[0]));
+        for (MatchingRun run : report.runs()) {
+            List<String> cells = new ArrayList<>(List.of(run.matching(), spaced(run.critical()),
+                    Long.toString(run.totalCritical()), Long.toString(report.excess(run))));
+            for (String phase : PHASES) {
+                double ms = run.millis(phase);
+                cells.add(ms < 0 ? "-" : String.format(Locale.ROOT, "%.2f", ms));
+            }
+            cells.add(String.format(Locale.ROOT, "%.2f", run.totalMillis()));
+            cells.add(run.peakHeapBytes() < 0 ? "-" : String.format(Locale.ROOT, "%.1f MiB", run.peakHeapBytes() / MIB));
+            rows.add(cells.toArray(new String[0]));
+        }
+        int columns = header.size();
+        int[] width = new int[columns];
+        for (String[] r : rows) {
+            for (int c = 0; c < columns; c++) {
+                width[c] = Math.max(width[c], r[c].length());
+            }
+        }
+        for (String[] r : rows) {
+            StringBuilder line = new StringBuilder("  ");
+            for (int c = 0; c < columns; c++) {
+                boolean left = c < 2;
+                String cell = left ? pad(r[c], width[c], false) : pad(r[c], width[c], true);
+                line.append(cell).append(c + 1 < columns ? "  " : "");
+            }
+            text.append(line.toString().stripTrailing()).append('\n');
+        }
+    }
+
+    private static String pad(String s, int width, boolean right) {
+        String fill = " ".repeat(width - s.length());
+        return right ? fill + s : s + fill;
+    }
+
+    private static String homologyLine(ComparisonReport report) {
+        StringJoiner parts = new StringJoiner(", ");
+        for (HomologyGroup g : report.homology().groups()) {
+            parts.add("H_" + g.dimension() + " = " + TextReportWriter.groupText(g, Coefficients.INTEGERS));
+        }
+        return parts.length() == 0 ? "none (no cells)" : parts.toString();
+    }
+
+    private static void row(StringBuilder text, String label, String value) {
+        text.append(String.format(Locale.ROOT, ROW, label, value));
+    }
+
+    private static String counted(List<? extends Number> counts) {
+        if (counts.isEmpty()) {
+            return "0, no cells";
+        }
+        long total = counts.stream().mapToLong(Number::longValue).sum();
+        StringJoiner byDimension = new StringJoiner(" + ");
+        counts.forEach(c -> byDimension.add(c.toString()));
+        return counts.size() == 1 ? total + " in dimension 0"
+                : total + " = " + byDimension + " in dimensions 0.." + (counts.size() - 1);
+    }
+
+    private static String spaced(List<Integer> counts) {
+        StringJoiner j = new StringJoiner(" ");
+        counts.forEach(c -> j.add(Integer.toString(c)));
+        return j.toString();
+    }
+}

@@ -1,0 +1,82 @@
+package dev.morse.report;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.util.DefaultIndenter;
+import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
+import com.fasterxml.jackson.core.util.Separators;
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.math.RoundingMode;
+import java.util.List;
+
+/** The one JSON layout of every writer here: objects a field per line, arrays of numbers on one line. */
+final class JsonStyle {
+    private static final JsonFactory FACTORY = JsonFactory.builder().build();
+    private static final int TIMING_DECIMALS = 3;
+
+    private JsonStyle() {
+    }
+
+    /** What a writer puts between the generator's start and end. */
+    @FunctionalInterface
+    interface Body {
+        void write(JsonGenerator json) throws IOException;
+    }
+
+    /** Indented JSON text from {@code body}, ending with a newline. */
+    static String toText(Body body) {
+        StringWriter out = new StringWriter();
+        try {
+            write(out, body);
+        } catch (IOException e) {
+            throw new UncheckedIOException("a string writer does not fail", e);
+        }
+        return out.toString();
+    }
+
+    /** Writes {@code body} as indented JSON and a final newline to {@code out}; does not close it. */
+    static void write(Writer out, Body body) throws IOException {
+        try (JsonGenerator json = FACTORY.createGenerator(out)) {
+            json.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
+            json.setPrettyPrinter(prettyPrinter());
+            body.write(json);
+        }
+        out.write('\n');
+        out.flush();
+    }
+
+    static DefaultPrettyPrinter prettyPrinter() {
+        Separators separators = Separators.createDefaultInstance()
+                .withObjectFieldValueSpacing(Separators.Spacing.AFTER)
+                .withArrayEmptySeparator("")
+                .withObjectEmptySeparator("");
+        DefaultPrettyPrinter printer = new DefaultPrettyPrinter(separators);
+        // objects one field per line; arrays stay on one line, where cell counts read best
+        printer.indentObjectsWith(new DefaultIndenter("  ", "\n"));
+        printer.indentArraysWith(DefaultPrettyPrinter.FixedSpaceIndenter.instance);
+        return printer;
+    }
+
+    static void intArray(JsonGenerator json, String field, List<? extends Number> values) throws IOException {
+        json.writeArrayFieldStart(field);
+        for (Number v : values) {
+            if (v instanceof BigInteger big) {
+                json.writeNumber(big);
+            } else {
+                json.writeNumber(v.longValue());
+            }
+        }
+        json.writeEndArray();
+    }
+
+    /** Milliseconds with three decimals. */
+    static void millis(JsonGenerator json, String field, double milliseconds) throws IOException {
+        json.writeFieldName(field);
+        json.writeNumber(BigDecimal.valueOf(milliseconds).setScale(TIMING_DECIMALS, RoundingMode.HALF_UP));
+    }
+}

@@ -10,20 +10,33 @@ public interface ChainComplex {
     /** Which construction this is. */
     ComplexKind kind();
 
+    /** Where each dimension's cells start. */
+    GradedCells grading();
+
     /** The top dimension, or -1 when there are no cells. */
-    int dimension();
+    default int dimension() {
+        return grading().dimension();
+    }
 
     /** Total number of cells. */
-    int cellCount();
+    default int cellCount() {
+        return grading().cellCount();
+    }
 
     /** Number of cells of dimension {@code d}; 0 outside {@code 0..dimension()}. */
-    int cellCount(int d);
+    default int cellCount(int d) {
+        return grading().cellCount(d);
+    }
 
     /** The first cell of dimension {@code d}, for {@code 0 <= d <= dimension() + 1}. */
-    int firstCell(int d);
+    default int firstCell(int d) {
+        return grading().firstCell(d);
+    }
 
     /** The dimension of {@code cell}. */
-    int dimensionOf(int cell);
+    default int dimensionOf(int cell) {
+        return grading().dimensionOf(cell);
+    }
 
     /** For every cell, its faces with incidence numbers. */
     Boundary boundary();

@@ -168,28 +168,8 @@ public final class SimplicialComplex implements ChainComplex {
     }
 
     @Override
-    public int dimension() {
-        return cells.dimension();
-    }
-
-    @Override
-    public int cellCount() {
-        return cells.cellCount();
-    }
-
-    @Override
-    public int cellCount(int d) {
-        return cells.cellCount(d);
-    }
-
-    @Override
-    public int firstCell(int d) {
-        return cells.firstCell(d);
-    }
-
-    @Override
-    public int dimensionOf(int cell) {
-        return cells.dimensionOf(cell);
+    public GradedCells grading() {
+        return cells;
     }
 
     @Override

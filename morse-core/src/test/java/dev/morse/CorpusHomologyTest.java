@@ -5,8 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.complex.CellularComplex;
 import dev.morse.complex.ChainComplex;
-import dev.morse.complex.CwPosetCheck;
-import dev.morse.complex.CwPosetVerdict;
+import dev.morse.cw.CwPosetCheck;
+import dev.morse.cw.CwPosetVerdict;
 import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.generate.CorpusCase;
@@ -19,7 +19,7 @@ import dev.morse.io.SimplicialReader;
 import dev.morse.matching.MatchingHeuristic;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.poset.Poset;
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -107,7 +107,7 @@ class CorpusHomologyTest {
             complexes.add(OrderComplex.of(poset));
         }
         if (c.cwPoset()) {
-            complexes.add(CellularComplex.of(poset));
+            complexes.add(CwPosetCheck.cellularComplex(poset));
         }
         return complexes;
     }

@@ -1,5 +1,7 @@
 package dev.morse;
 
+import dev.morse.cw.CwPosetCheck;
+
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -57,7 +59,7 @@ class OjalgoCorpusCrossCheckTest {
             return SimplicialComplex.of(SimplicialReader.read(c.path(corpus)));
         }
         Poset poset = PosetReader.read(c.path(corpus));
-        return c.cwPoset() ? CellularComplex.of(poset) : OrderComplex.of(poset);
+        return c.cwPoset() ? CwPosetCheck.cellularComplex(poset) : OrderComplex.of(poset);
     }
 
     private static boolean fitsDense(ChainComplex complex) {

@@ -2,13 +2,13 @@ package dev.morse.bench;
 
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.complex.ComplexSelector;
+import dev.morse.cw.ComplexSelector;
 import dev.morse.homology.Coefficients;
 import dev.morse.matching.Matching;
 import dev.morse.matching.MatchingHeuristic;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.pipeline.InputLoader;
 import java.io.IOException;
 import java.nio.file.Path;

@@ -2,11 +2,11 @@ package dev.morse.bench;
 
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.complex.ComplexSelector;
+import dev.morse.cw.ComplexSelector;
 import dev.morse.homology.Coefficients;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;

@@ -2,14 +2,14 @@ package dev.morse.bench;
 
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.complex.ComplexSelector;
+import dev.morse.cw.ComplexSelector;
 import dev.morse.generate.VoxelBlock;
 import dev.morse.homology.Coefficients;
 import dev.morse.io.PosetReader;
 import dev.morse.matching.MatchingHeuristic;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.poset.Poset;
 import java.io.BufferedWriter;
 import java.io.IOException;

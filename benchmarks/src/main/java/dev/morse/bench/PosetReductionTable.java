@@ -1,16 +1,16 @@
 package dev.morse.bench;
 
 import dev.morse.generate.Families;
-import dev.morse.generate.FaceCounts;
+import dev.morse.complex.FaceCounts;
 import dev.morse.generate.Generated;
 import dev.morse.generate.PartitionLattice;
 import dev.morse.io.PosetWriter;
 import dev.morse.pipeline.HomologyOptions;
 import dev.morse.pipeline.HomologyPipeline;
 import dev.morse.poset.Poset;
-import dev.morse.reduction.PosetReduction;
-import dev.morse.reduction.ReductionResult;
-import dev.morse.reduction.ReductionStats;
+import dev.morse.posetreduction.PosetReduction;
+import dev.morse.posetreduction.ReductionResult;
+import dev.morse.posetreduction.ReductionStats;
 import dev.morse.report.HomologyReport;
 import dev.morse.report.PhaseTiming;
 import java.util.Locale;

@@ -2,7 +2,7 @@ package dev.morse.cli;
 
 import dev.morse.complex.ComplexChoice;
 import dev.morse.matching.MatchingHeuristics;
-import dev.morse.morse.MorseComplex;
+import dev.morse.morsecomplex.MorseComplex;
 import dev.morse.pipeline.ExportOptions;
 import dev.morse.pipeline.MorseComplexExport;
 import dev.morse.report.Counted;

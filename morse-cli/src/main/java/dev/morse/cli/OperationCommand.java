@@ -1,7 +1,7 @@
 package dev.morse.cli;
 
 import dev.morse.generate.Generated;
-import dev.morse.generate.PosetOperations;
+import dev.morse.poset.PosetOperations;
 import dev.morse.io.InputException;
 import dev.morse.io.InputFiles;
 import dev.morse.poset.Poset;

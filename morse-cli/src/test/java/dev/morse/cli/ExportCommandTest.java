@@ -4,10 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.complex.ComplexChoice;
-import dev.morse.homology.SmithForm;
-import dev.morse.homology.SmithNormalForm;
+import dev.morse.homology.SmithInvariants;
+import dev.morse.homology.SparseSmithNormalForm;
 import dev.morse.homology.SparseIntegerMatrix;
-import dev.morse.morse.MorseComplex;
+import dev.morse.morsecomplex.MorseComplex;
 import dev.morse.pipeline.ExportOptions;
 import dev.morse.pipeline.MorseComplexExport;
 import java.io.IOException;
@@ -80,7 +80,7 @@ class ExportCommandTest {
             }
             // the exported matrices alone give H_1(RP^2) = Z/2: the torsion is the one non-unit invariant
             // factor of d_2 (Hatcher, Algebraic Topology, 2002, from memory)
-            SmithForm d2 = SmithNormalForm.compute(SparseIntegerMatrix.fromDense(read[2].entries(), read[2].columns()));
+            SmithInvariants d2 = SparseSmithNormalForm.compute(SparseIntegerMatrix.fromDense(read[2].entries(), read[2].columns()));
             assertEquals(List.of(BigInteger.TWO), d2.nonUnitFactors(), matching);
         }
     }

@@ -10,7 +10,7 @@ import dev.morse.homology.Coefficients;
 import dev.morse.image.CubicalComplex;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;

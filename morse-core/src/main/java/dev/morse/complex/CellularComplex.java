@@ -1,12 +1,13 @@
 package dev.morse.complex;
 
+
 import dev.morse.poset.Adjacency;
 import dev.morse.poset.Poset;
 
 /**
  * The cellular chain complex of a CW poset: one cell per element, of dimension its height, with
  * boundary {@code ∂x = Σ ε(x, y) y} over the elements y covered by x, where the incidence signs
- * ε = ±1 are those found by {@link CwPosetCheck}. When the poset is the face poset of a regular CW
+ * ε = ±1 are those found by the CW poset check. When the poset is the face poset of a regular CW
  * complex this computes the homology of that complex, which is that of the order complex (its
  * barycentric subdivision; Björner 1984), with one cell per element instead of one per chain.
  * Cells are numbered by dimension, then by element id.
@@ -32,21 +33,11 @@ public final class CellularComplex implements ChainComplex {
     }
 
     /**
-     * The cellular chain complex of a CW poset.
-     *
-     * @throws IllegalArgumentException with the {@link CwPosetVerdict#reason()} if {@code poset}
-     *     is not a CW poset
+     * Builds the cellular complex of a CW poset from incidence signs already found (by
+     * {@code dev.morse.cw.CwPosetCheck}), indexed like the lower-cover entries of the poset.
+     * The signs are trusted: this does not check that they square the boundary to zero.
      */
-    public static CellularComplex of(Poset poset) {
-        CwStructure structure = CwPosetCheck.analyse(poset);
-        if (!structure.verdict().isCwPoset()) {
-            throw new IllegalArgumentException(structure.verdict().reason());
-        }
-        return from(poset, structure.coverSigns());
-    }
-
-    /** Builds from signs already found, indexed like the lower-cover entries of the poset. */
-    static CellularComplex from(Poset poset, byte[] coverSigns) {
+    public static CellularComplex withIncidences(Poset poset, byte[] coverSigns) {
         int n = poset.size();
         int top = poset.maxHeight();
         int[] counts = new int[top + 1];

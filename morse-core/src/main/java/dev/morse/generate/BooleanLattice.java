@@ -1,5 +1,7 @@
 package dev.morse.generate;
 
+import dev.morse.poset.PosetOperations;
+
 import dev.morse.poset.Poset;
 import dev.morse.poset.PosetBuilder;
 
@@ -30,7 +32,7 @@ public final class BooleanLattice {
                 b.relate(mask & ~Integer.lowestOneBit(bits), mask, 0);
             }
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 
     /** The proper part: nonempty subsets other than {@code {1..n}}; for {@code n ≥ 1}. */

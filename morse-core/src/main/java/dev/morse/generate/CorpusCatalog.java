@@ -1,5 +1,7 @@
 package dev.morse.generate;
 
+import dev.morse.poset.PosetOperations;
+
 import static dev.morse.generate.CorpusEntry.poset;
 import static dev.morse.generate.CorpusEntry.simplicial;
 

@@ -1,5 +1,7 @@
 package dev.morse.generate;
 
+import dev.morse.complex.FaceCounts;
+
 import dev.morse.complex.Facets;
 import dev.morse.io.PosetWriter;
 import dev.morse.io.SimplicialWriter;

@@ -81,6 +81,6 @@ public final class CrossPolytopeFaces {
                 }
             }
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 }

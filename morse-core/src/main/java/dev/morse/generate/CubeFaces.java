@@ -75,6 +75,6 @@ public final class CubeFaces {
                 b.relate(empty, offset + code, 0);
             }
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 }

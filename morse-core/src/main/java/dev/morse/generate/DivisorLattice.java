@@ -1,5 +1,7 @@
 package dev.morse.generate;
 
+import dev.morse.poset.PosetOperations;
+
 import dev.morse.poset.Poset;
 import dev.morse.poset.PosetBuilder;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
@@ -59,7 +61,7 @@ public final class DivisorLattice {
                 }
             }
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 
     /** The open interval {@code (1, n)}: divisors other than 1 and n; for {@code n ≥ 2}. */

@@ -20,7 +20,7 @@ public final class NonRegularCells {
     public static Poset loop() {
         PosetBuilder b = new PosetBuilder();
         b.relate(b.element("v"), b.element("e"), 0);
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 
     /**
@@ -35,6 +35,6 @@ public final class NonRegularCells {
         b.relate(v, e, 0);
         b.relate(e, b.element("d1"), 0);
         b.relate(e, b.element("d2"), 0);
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 }

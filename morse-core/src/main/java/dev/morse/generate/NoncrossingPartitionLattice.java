@@ -1,5 +1,7 @@
 package dev.morse.generate;
 
+import dev.morse.poset.PosetOperations;
+
 import dev.morse.poset.Poset;
 import dev.morse.poset.PosetBuilder;
 import it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap;
@@ -55,7 +57,7 @@ public final class NoncrossingPartitionLattice {
                 }
             }
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 
     /** The proper part: noncrossing partitions other than the finest and the coarsest; {@code n ≥ 2}. */

@@ -1,5 +1,7 @@
 package dev.morse.generate;
 
+import dev.morse.poset.PosetOperations;
+
 import dev.morse.poset.Poset;
 import dev.morse.poset.PosetBuilder;
 import it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap;
@@ -43,7 +45,7 @@ public final class PartitionLattice {
                 }
             }
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 
     /** The proper part: partitions other than the finest and the coarsest; for {@code n ≥ 2}. */

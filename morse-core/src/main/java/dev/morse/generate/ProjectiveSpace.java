@@ -45,7 +45,7 @@ public final class ProjectiveSpace {
                 b.relate(b.element(representative(face)), cell, 0);
             }
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 
     /** The antipodal face: 0 and 1 swapped. */

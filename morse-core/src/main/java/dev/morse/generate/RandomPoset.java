@@ -48,6 +48,6 @@ public final class RandomPoset {
                 }
             }
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 }

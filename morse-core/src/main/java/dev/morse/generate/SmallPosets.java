@@ -18,12 +18,12 @@ public final class SmallPosets {
         requirePositive(k);
         PosetBuilder b = new PosetBuilder();
         for (int i = 1; i <= k; i++) {
-            int x = b.element(Built.checkLabel(prefix + i));
+            int x = b.element(PosetBuilder.requireWritableLabel(prefix + i));
             if (i > 1) {
                 b.relate(x - 1, x, 0);
             }
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 
     /** {@code k} pairwise incomparable elements {@code a1 .. ak}; two of them form the sphere S^0. */
@@ -36,9 +36,9 @@ public final class SmallPosets {
         requirePositive(k);
         PosetBuilder b = new PosetBuilder();
         for (int i = 1; i <= k; i++) {
-            b.element(Built.checkLabel(prefix + i));
+            b.element(PosetBuilder.requireWritableLabel(prefix + i));
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 
     private static void requirePositive(int k) {

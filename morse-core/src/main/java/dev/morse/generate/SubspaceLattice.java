@@ -1,5 +1,7 @@
 package dev.morse.generate;
 
+import dev.morse.poset.PosetOperations;
+
 import dev.morse.poset.Poset;
 import dev.morse.poset.PosetBuilder;
 import it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap;
@@ -62,7 +64,7 @@ public final class SubspaceLattice {
                 b.relate(id, upper, 0);
             }
         }
-        return Built.poset(b);
+        return b.buildKnownAcyclic();
     }
 
     /** The proper part: subspaces other than 0 and {@code F_q^n}. */

@@ -13,7 +13,7 @@ import java.util.function.IntFunction;
  * {@code ∂_(d+1)} (common practice; e.g. Munkres, Elements of Algebraic Topology, 1984, §11).
  *
  * <p>Each boundary map is reduced once, by the method that fits the coefficients: over Z its
- * Smith normal form ({@link SmithNormalForm}), over Q its rational rank ({@link RationalRank}),
+ * Smith normal form ({@link SparseSmithNormalForm}), over Q its rational rank ({@link RationalRank}),
  * over Z/p its rank modulo p ({@link ModularRank}). Only one boundary matrix is held at a time.
  */
 public final class HomologyCalculator {
@@ -52,7 +52,7 @@ public final class HomologyCalculator {
             SparseIntegerMatrix matrix = boundary.apply(d);
             switch (coefficients.ring()) {
                 case INTEGERS -> {
-                    SmithForm form = SmithNormalForm.compute(matrix);
+                    SmithInvariants form = SparseSmithNormalForm.compute(matrix);
                     rank[d] = form.rank();
                     torsion.set(d - 1, form.nonUnitFactors());
                 }

@@ -1,16 +1,18 @@
 package dev.morse.implicit;
 
+import dev.morse.poset.ChainCounts;
+
 import dev.morse.homology.Coefficients;
-import dev.morse.homology.DenseSmithNormalForm;
+import dev.morse.homology.DenseSmithOracle;
 import dev.morse.homology.Homology;
 import dev.morse.homology.HomologyCalculator;
 import dev.morse.homology.HomologyGroup;
-import dev.morse.homology.SmithForm;
+import dev.morse.homology.SmithInvariants;
 import dev.morse.homology.SparseIntegerMatrix;
-import dev.morse.morse.AlgebraicReduction;
-import dev.morse.morse.MorseComplex;
-import dev.morse.morse.PhaseTimes;
-import dev.morse.morse.ReductionRound;
+import dev.morse.morsecomplex.AlgebraicReduction;
+import dev.morse.morsecomplex.MorseComplex;
+import dev.morse.morsecomplex.PhaseTimes;
+import dev.morse.morsecomplex.ReductionRound;
 import dev.morse.poset.Poset;
 import java.math.BigInteger;
 import java.util.ArrayList;
@@ -202,7 +204,7 @@ public final class ImplicitHomology {
                 throw new IllegalStateException("a Morse coefficient exceeds 2^63 in a boundary matrix of " + m.rows()
                         + " by " + m.columns() + " critical chains, too large for the dense BigInteger Smith normal form");
             }
-            SmithForm form = DenseSmithNormalForm.compute(m.toDense());
+            SmithInvariants form = DenseSmithOracle.compute(m.toDense());
             List<BigInteger> factors = form.nonUnitFactors();
             switch (coefficients.ring()) {
                 case INTEGERS -> {

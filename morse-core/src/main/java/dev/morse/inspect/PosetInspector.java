@@ -1,9 +1,9 @@
 package dev.morse.inspect;
 
-import dev.morse.complex.CwPosetCheck;
-import dev.morse.complex.CwPosetVerdict;
-import dev.morse.generate.FaceCounts;
-import dev.morse.generate.Mobius;
+import dev.morse.cw.CwPosetCheck;
+import dev.morse.cw.CwPosetVerdict;
+import dev.morse.complex.FaceCounts;
+import dev.morse.poset.Mobius;
 import dev.morse.poset.Poset;
 import dev.morse.poset.StrictDownSets;
 import java.math.BigInteger;

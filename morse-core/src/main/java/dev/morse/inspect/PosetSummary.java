@@ -1,7 +1,7 @@
 package dev.morse.inspect;
 
-import dev.morse.complex.CwPosetVerdict;
-import dev.morse.generate.FaceCounts;
+import dev.morse.cw.CwPosetVerdict;
+import dev.morse.complex.FaceCounts;
 import java.math.BigInteger;
 import java.util.List;
 import java.util.Objects;

@@ -1,7 +1,7 @@
 package dev.morse.pipeline;
 
 import dev.morse.complex.ChainComplex;
-import dev.morse.complex.CwPosetVerdict;
+import dev.morse.cw.CwPosetVerdict;
 import java.util.Objects;
 import java.util.Optional;
 

@@ -3,8 +3,8 @@ package dev.morse.pipeline;
 import dev.morse.complex.CellularComplex;
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.complex.CwPosetCheck;
-import dev.morse.complex.CwPosetVerdict;
+import dev.morse.cw.CwPosetCheck;
+import dev.morse.cw.CwPosetVerdict;
 import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.io.InputException;
@@ -69,7 +69,7 @@ public final class DrawingPipeline {
         }
         CwPosetVerdict verdict = CwPosetCheck.check(poset);
         if (verdict.isCwPoset()) {
-            return marked(source, CellularComplex.of(poset), "Hasse diagram of a CW poset, its cellular complex", options);
+            return marked(source, CwPosetCheck.cellularComplex(poset), "Hasse diagram of a CW poset, its cellular complex", options);
         }
         if (options.complex() == ComplexChoice.CELLULAR) {
             throw new InputException(source, InputException.NO_LINE,

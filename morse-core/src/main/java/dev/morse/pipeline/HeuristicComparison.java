@@ -8,7 +8,7 @@ import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
 import dev.morse.matching.MatchingTrials;
 import dev.morse.matching.TrialCount;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.report.ComparisonReport;
 import dev.morse.report.MatchingRun;
 import dev.morse.report.PhaseTiming;

@@ -1,15 +1,15 @@
 package dev.morse.pipeline;
 
 import dev.morse.complex.ComplexKind;
-import dev.morse.complex.CwPosetVerdict;
+import dev.morse.cw.CwPosetVerdict;
 import dev.morse.homology.Homology;
-import dev.morse.implicit.ChainCounts;
+import dev.morse.poset.ChainCounts;
 import dev.morse.implicit.ImplicitHomology;
 import dev.morse.io.InputException;
 import dev.morse.io.InputFormat;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.poset.Poset;
-import dev.morse.reduction.ReductionStats;
+import dev.morse.posetreduction.ReductionStats;
 import dev.morse.report.ComplexEngine;
 import dev.morse.report.HomologyReport;
 import dev.morse.report.PhaseTiming;

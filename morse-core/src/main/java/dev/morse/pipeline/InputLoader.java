@@ -1,8 +1,8 @@
 package dev.morse.pipeline;
 
 import dev.morse.complex.ComplexChoice;
-import dev.morse.complex.ComplexSelection;
-import dev.morse.complex.ComplexSelector;
+import dev.morse.cw.ComplexSelection;
+import dev.morse.cw.ComplexSelector;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.image.ImageInput;
 import dev.morse.io.InputException;

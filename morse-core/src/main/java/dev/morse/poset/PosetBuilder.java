@@ -70,6 +70,37 @@ public final class PosetBuilder {
     }
 
     /**
+     * Builds a poset whose relations are acyclic by construction, as a generator's are.
+     *
+     * @throws IllegalStateException if they are not after all: a defect in the caller
+     */
+    public Poset buildKnownAcyclic() {
+        try {
+            return build();
+        } catch (OrderCycleException e) {
+            throw new IllegalStateException("relations meant to be acyclic have a cycle", e);
+        }
+    }
+
+    /**
+     * Returns {@code label} if the text formats can write it: nonempty, without white space, ':' or '#'.
+     *
+     * @throws IllegalArgumentException naming the character that cannot be written
+     */
+    public static String requireWritableLabel(String label) {
+        if (label.isEmpty()) {
+            throw new IllegalArgumentException("empty label");
+        }
+        for (int i = 0; i < label.length(); i++) {
+            char c = label.charAt(i);
+            if (Character.isWhitespace(c) || c == ':' || c == '#') {
+                throw new IllegalArgumentException("label '" + label + "' contains '" + c + "'");
+            }
+        }
+        return label;
+    }
+
+    /**
      * Builds the poset.
      *
      * @throws OrderCycleException if the relations contain a directed cycle

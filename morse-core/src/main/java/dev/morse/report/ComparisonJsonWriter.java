@@ -1,7 +1,7 @@
 package dev.morse.report;
 
 import com.fasterxml.jackson.core.JsonGenerator;
-import dev.morse.complex.CwPosetVerdict;
+import dev.morse.cw.CwPosetVerdict;
 import java.io.IOException;
 import java.util.Locale;
 

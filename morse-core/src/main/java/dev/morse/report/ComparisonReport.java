@@ -1,7 +1,7 @@
 package dev.morse.report;
 
 import dev.morse.complex.ComplexKind;
-import dev.morse.complex.CwPosetVerdict;
+import dev.morse.cw.CwPosetVerdict;
 import dev.morse.homology.Homology;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.io.InputFormat;

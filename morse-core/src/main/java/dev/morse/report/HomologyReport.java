@@ -1,14 +1,14 @@
 package dev.morse.report;
 
 import dev.morse.complex.ComplexKind;
-import dev.morse.complex.CwPosetVerdict;
+import dev.morse.cw.CwPosetVerdict;
 import dev.morse.homology.Coefficients;
 import dev.morse.homology.Homology;
 import dev.morse.io.InputFormat;
 import dev.morse.matching.TrialCount;
-import dev.morse.morse.MorseReduction;
-import dev.morse.morse.ReductionRound;
-import dev.morse.reduction.ReductionStats;
+import dev.morse.morsecomplex.MorseReduction;
+import dev.morse.morsecomplex.ReductionRound;
+import dev.morse.posetreduction.ReductionStats;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;

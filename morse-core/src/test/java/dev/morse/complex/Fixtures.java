@@ -17,15 +17,15 @@ import java.util.List;
 import java.util.Random;
 
 /** Posets and assertions shared by the tests of this package. */
-final class Fixtures {
+public final class Fixtures {
     private Fixtures() {
     }
 
-    static Poset poset(String body) {
+    public static Poset poset(String body) {
         return PosetReader.parse("morse-poset 1\n" + body, "test");
     }
 
-    static Poset build(PosetBuilder builder) {
+    public static Poset build(PosetBuilder builder) {
         try {
             return builder.build();
         } catch (OrderCycleException e) {
@@ -34,7 +34,7 @@ final class Fixtures {
     }
 
     /** Integral homology, each group as text ("Z", "Z^2", "Z/2", "0"), dimensions 0 to the top. */
-    static List<String> homology(ChainComplex complex) {
+    public static List<String> homology(ChainComplex complex) {
         Homology h = HomologyCalculator.compute(complex, Coefficients.INTEGERS);
         List<String> groups = new ArrayList<>();
         for (HomologyGroup g : h.groups()) {
@@ -44,7 +44,7 @@ final class Fixtures {
     }
 
     /** Checks ∂∂ = 0, that faces lie one dimension down, and that the coboundary is the transpose. */
-    static void assertChainComplex(ChainComplex complex) {
+    public static void assertChainComplex(ChainComplex complex) {
         Boundary b = complex.boundary();
         assertEquals(complex.cellCount(), b.cellCount());
         long[] sum = new long[complex.cellCount()];
@@ -81,7 +81,7 @@ final class Fixtures {
     }
 
     /** Every incidence number is ±1 and every cell of positive dimension has a face. */
-    static void assertUnitIncidences(ChainComplex complex) {
+    public static void assertUnitIncidences(ChainComplex complex) {
         Boundary b = complex.boundary();
         for (int c = 0; c < complex.cellCount(); c++) {
             assertTrue(complex.dimensionOf(c) == 0 || b.size(c) > 0, complex.cellName(c));
@@ -92,7 +92,7 @@ final class Fixtures {
     }
 
     /** The nonempty proper subsets of {1..n} ordered by inclusion, labelled like "134". */
-    static Poset booleanProperPart(int n) {
+    public static Poset booleanProperPart(int n) {
         PosetBuilder b = new PosetBuilder();
         int full = (1 << n) - 1;
         for (int s = 1; s < full; s++) {
@@ -118,7 +118,7 @@ final class Fixtures {
     }
 
     /** The product order on P × Q; its covers change one coordinate by a cover. */
-    static Poset product(Poset p, Poset q) {
+    public static Poset product(Poset p, Poset q) {
         PosetBuilder b = new PosetBuilder();
         for (int x = 0; x < p.size(); x++) {
             for (int y = 0; y < q.size(); y++) {
@@ -139,7 +139,7 @@ final class Fixtures {
     }
 
     /** The poset with one more element above everything. */
-    static Poset withTop(Poset p, String topLabel) {
+    public static Poset withTop(Poset p, String topLabel) {
         PosetBuilder b = new PosetBuilder();
         int top = b.element(topLabel);
         for (int x = 0; x < p.size(); x++) {
@@ -159,7 +159,7 @@ final class Fixtures {
      * a 0 marks a free coordinate, so the dimension is the number of zeros, and g lies below f when
      * f agrees with g on the coordinates f fixes.
      */
-    static List<int[]> cubeBoundaryFaces(int k) {
+    public static List<int[]> cubeBoundaryFaces(int k) {
         List<int[]> faces = new ArrayList<>();
         int[] v = new int[k];
         Arrays.fill(v, -1);
@@ -180,7 +180,7 @@ final class Fixtures {
     }
 
     /** The faces obtained from {@code face} by fixing one free coordinate to -1 or +1. */
-    static List<int[]> lowerCoversOfCubeFace(int[] face) {
+    public static List<int[]> lowerCoversOfCubeFace(int[] face) {
         List<int[]> covers = new ArrayList<>();
         for (int i = 0; i < face.length; i++) {
             if (face[i] == 0) {
@@ -194,7 +194,7 @@ final class Fixtures {
         return covers;
     }
 
-    static String signLabel(int[] face) {
+    public static String signLabel(int[] face) {
         StringBuilder s = new StringBuilder();
         for (int t : face) {
             s.append(t < 0 ? '-' : t > 0 ? '+' : '0');
@@ -203,7 +203,7 @@ final class Fixtures {
     }
 
     /** The face poset of the boundary of the k-cube. */
-    static Poset cubeBoundary(int k) {
+    public static Poset cubeBoundary(int k) {
         PosetBuilder b = new PosetBuilder();
         for (int[] f : cubeBoundaryFaces(k)) {
             int upper = b.element(signLabel(f));
@@ -215,7 +215,7 @@ final class Fixtures {
     }
 
     /** The antipodal class of a cube face, named by the representative whose first nonzero sign is +. */
-    static String antipodalLabel(int[] face) {
+    public static String antipodalLabel(int[] face) {
         int first = 0;
         while (face[first] == 0) {
             first++;
@@ -230,7 +230,7 @@ final class Fixtures {
     }
 
     /** The face poset of the cube boundary modulo the antipodal map x -> -x. */
-    static Poset antipodalCubeQuotient(int k) {
+    public static Poset antipodalCubeQuotient(int k) {
         PosetBuilder b = new PosetBuilder();
         for (int[] f : cubeBoundaryFaces(k)) {
             int upper = b.element(antipodalLabel(f));
@@ -246,7 +246,7 @@ final class Fixtures {
      * coordinates are its unit intervals; it covers the cells that fix one odd coordinate to an
      * even neighbour. Labelled by coordinates joined with dots.
      */
-    static Poset cubicalGrid(int m, int k) {
+    public static Poset cubicalGrid(int m, int k) {
         PosetBuilder b = new PosetBuilder();
         int side = 2 * m + 1;
         int total = 1;
@@ -283,7 +283,7 @@ final class Fixtures {
     }
 
     /** A random poset: relations i < j for i < j with the given probability, elements 0..n-1 labelled "p0".. */
-    static Poset randomPoset(Random random, int n, double density) {
+    public static Poset randomPoset(Random random, int n, double density) {
         PosetBuilder b = new PosetBuilder();
         for (int i = 0; i < n; i++) {
             b.element("p" + i);

@@ -1,12 +1,15 @@
 package dev.morse.generate;
 
+import dev.morse.poset.Mobius;
+import dev.morse.poset.PosetOperations;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.complex.ComplexSelector;
+import dev.morse.cw.ComplexSelector;
 import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.homology.Coefficients;
@@ -17,7 +20,7 @@ import dev.morse.io.PosetReader;
 import dev.morse.io.SimplicialReader;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.poset.Poset;
 import java.io.IOException;
 import java.io.StringWriter;

@@ -1,5 +1,7 @@
 package dev.morse.generate;
 
+import dev.morse.poset.Mobius;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;

@@ -1,10 +1,14 @@
 package dev.morse.generate;
 
+import dev.morse.complex.FaceCounts;
+import dev.morse.poset.Mobius;
+import dev.morse.poset.PosetOperations;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.morse.complex.CwPosetCheck;
+import dev.morse.cw.CwPosetCheck;
 import dev.morse.complex.OrderComplex;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.poset.Poset;

@@ -1,5 +1,7 @@
 package dev.morse.generate;
 
+import dev.morse.cw.CwPosetCheck;
+
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -8,7 +10,7 @@ import dev.morse.complex.CellularComplex;
 import dev.morse.homology.Coefficients;
 import dev.morse.matching.CoreductionHeuristic;
 import dev.morse.matching.MatchingOptions;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.io.PosetReader;
 import dev.morse.io.PosetWriter;
 import dev.morse.poset.Poset;
@@ -23,7 +25,7 @@ class VoxelBlockTest {
     void blockWithTunnelsAndCavitiesHasTheHomologyOfItsConstruction() {
         // genus-2 handlebody with four sealed cavities: H = Z, Z^2, Z^4, 0 (Alexander duality; see VoxelBlock)
         VoxelBlock block = VoxelBlock.of(11, 2, 4);
-        CellularComplex complex = CellularComplex.of(block.toPoset());
+        CellularComplex complex = CwPosetCheck.cellularComplex(block.toPoset());
         MorseReduction.Outcome outcome = MorseReduction.run(complex, new MorseReduction.Request(new CoreductionHeuristic(),
                 MatchingOptions.DEFAULT, Coefficients.INTEGERS, true));
         assertEquals(block.expectedHomology(), outcome.homology().groups());

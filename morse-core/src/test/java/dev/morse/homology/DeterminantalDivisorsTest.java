@@ -23,14 +23,14 @@ class DeterminantalDivisorsTest {
             int columns = 1 + random.nextInt(5);
             long bound = n % 3 == 0 ? 1 : n % 3 == 1 ? 4 : 30;
             long[][] a = RandomMatrices.sparse(random, rows, columns, 0.3 + 0.6 * random.nextDouble(), bound);
-            SmithForm expected = byMinors(a, rows, columns);
+            SmithInvariants expected = byMinors(a, rows, columns);
             SparseIntegerMatrix m = SparseIntegerMatrix.fromDense(a, columns);
-            assertEquals(expected, SmithNormalForm.compute(m), "sparse path, matrix " + n);
-            assertEquals(expected, DenseSmithNormalForm.compute(m), "dense oracle, matrix " + n);
+            assertEquals(expected, SparseSmithNormalForm.compute(m), "sparse path, matrix " + n);
+            assertEquals(expected, DenseSmithOracle.compute(m), "dense oracle, matrix " + n);
         }
     }
 
-    private static SmithForm byMinors(long[][] a, int rows, int columns) {
+    private static SmithInvariants byMinors(long[][] a, int rows, int columns) {
         List<BigInteger> factors = new ArrayList<>();
         BigInteger previous = BigInteger.ONE;
         int rank = 0;
@@ -51,7 +51,7 @@ class DeterminantalDivisorsTest {
             }
             previous = divisor;
         }
-        return new SmithForm(rank, factors);
+        return new SmithInvariants(rank, factors);
     }
 
     /** Laplace expansion along the first chosen row. */

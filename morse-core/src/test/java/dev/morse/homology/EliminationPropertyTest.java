@@ -49,16 +49,16 @@ class EliminationPropertyTest {
             int columns = chain.length + random.nextInt(8);
             long[][] a = RandomMatrices.disguisedDiagonal(random, rows, columns, chain, 3 * (rows + columns));
             SparseIntegerMatrix m = RandomMatrices.matrix(a, columns);
-            SmithForm expected = new SmithForm(chain.length, RandomMatrices.nonUnit(chain));
-            assertEquals(expected, SmithNormalForm.compute(m), "disguised diagonal " + n);
-            assertEquals(expected, DenseSmithNormalForm.compute(m), "oracle on disguised diagonal " + n);
+            SmithInvariants expected = new SmithInvariants(chain.length, RandomMatrices.nonUnit(chain));
+            assertEquals(expected, SparseSmithNormalForm.compute(m), "disguised diagonal " + n);
+            assertEquals(expected, DenseSmithOracle.compute(m), "oracle on disguised diagonal " + n);
         }
     }
 
     private static void checkAgainstOracle(String what, long[][] a, int columns) {
         SparseIntegerMatrix m = RandomMatrices.matrix(a, columns);
-        SmithForm oracle = DenseSmithNormalForm.compute(m);
-        assertEquals(oracle, SmithNormalForm.compute(m), what + " " + Arrays.deepToString(a));
+        SmithInvariants oracle = DenseSmithOracle.compute(m);
+        assertEquals(oracle, SparseSmithNormalForm.compute(m), what + " " + Arrays.deepToString(a));
         assertEquals(oracle.rank(), RationalRank.rank(m), what + ": rank over Q");
         for (int p : PRIMES) {
             BigInteger prime = BigInteger.valueOf(p);

@@ -13,14 +13,14 @@ class SmithNormalFormTest {
         return SparseIntegerMatrix.fromDense(a, a.length == 0 ? 0 : a[0].length);
     }
 
-    private static SmithForm form(int rank, long... factors) {
-        return new SmithForm(rank, RandomMatrices.nonUnit(factors));
+    private static SmithInvariants form(int rank, long... factors) {
+        return new SmithInvariants(rank, RandomMatrices.nonUnit(factors));
     }
 
     /** Checks the sparse path and the dense oracle against a value derived by hand. */
-    private static void assertSmithForm(SmithForm expected, SparseIntegerMatrix m) {
-        assertEquals(expected, SmithNormalForm.compute(m), "sparse path");
-        assertEquals(expected, DenseSmithNormalForm.compute(m), "dense oracle");
+    private static void assertSmithForm(SmithInvariants expected, SparseIntegerMatrix m) {
+        assertEquals(expected, SparseSmithNormalForm.compute(m), "sparse path");
+        assertEquals(expected, DenseSmithOracle.compute(m), "dense oracle");
     }
 
     @Test
@@ -56,7 +56,7 @@ class SmithNormalFormTest {
         assertSmithForm(form(1, 2), m);
         // Long.MIN_VALUE twice in one place is -2^64.
         SparseIntegerMatrix big = new SparseIntegerMatrix(1, new int[] {0, 2}, new int[] {0, 0}, new long[] {Long.MIN_VALUE, Long.MIN_VALUE});
-        assertSmithForm(new SmithForm(1, List.of(BigInteger.TWO.pow(64))), big);
+        assertSmithForm(new SmithInvariants(1, List.of(BigInteger.TWO.pow(64))), big);
     }
 
     @Test
@@ -84,7 +84,7 @@ class SmithNormalFormTest {
         // N = 2^62 + 1. The entries have gcd 1 (an entry is 1), the determinant is -N - N = -2N,
         // so the Smith form is diag(1, 2N) with 2N = 2^63 + 2 > Long.MAX_VALUE.
         long n = N62 + 1;
-        SmithForm expected = new SmithForm(2, List.of(BigInteger.TWO.pow(63).add(BigInteger.TWO)));
+        SmithInvariants expected = new SmithInvariants(2, List.of(BigInteger.TWO.pow(63).add(BigInteger.TWO)));
         assertSmithForm(expected, dense(new long[][] {{1, n}, {1, -n}}));
     }
 
@@ -92,14 +92,14 @@ class SmithNormalFormTest {
     void productOfLargeCoprimeFactors() {
         // 2^62 and 2^62 + 1 are coprime (consecutive), so diag(2^62, 2^62 + 1) ~ diag(1, 2^62(2^62 + 1)).
         BigInteger n = BigInteger.TWO.pow(62);
-        SmithForm expected = new SmithForm(2, List.of(n.multiply(n.add(BigInteger.ONE))));
+        SmithInvariants expected = new SmithInvariants(2, List.of(n.multiply(n.add(BigInteger.ONE))));
         assertSmithForm(expected, dense(new long[][] {{N62, 0}, {0, N62 + 1}}));
     }
 
     @Test
     void extremeLongEntries() {
         // |Long.MIN_VALUE| = 2^63 does not fit a long.
-        assertSmithForm(new SmithForm(1, List.of(BigInteger.TWO.pow(63))), dense(new long[][] {{Long.MIN_VALUE}}));
+        assertSmithForm(new SmithInvariants(1, List.of(BigInteger.TWO.pow(63))), dense(new long[][] {{Long.MIN_VALUE}}));
         // Rows (MIN, MIN) and (MAX, MAX) are proportional over Q: rank 1; gcd(2^63, 2^63 - 1) = 1.
         long[][] a = {{Long.MIN_VALUE, Long.MIN_VALUE}, {Long.MAX_VALUE, Long.MAX_VALUE}};
         assertSmithForm(form(1), dense(a));
@@ -121,7 +121,7 @@ class SmithNormalFormTest {
             offsets[e + 1] = 2 * e + 2;
         }
         SparseIntegerMatrix m = new SparseIntegerMatrix(n, offsets, rows, values);
-        assertEquals(form(n - 1), SmithNormalForm.compute(m));
+        assertEquals(form(n - 1), SparseSmithNormalForm.compute(m));
     }
 
     @Test
@@ -137,6 +137,6 @@ class SmithNormalFormTest {
             a[e][e] = 1;
             a[(e + 1) % n][e] = e == n - 1 ? 1 : -1;
         }
-        assertEquals(form(n, 2), SmithNormalForm.compute(dense(a)));
+        assertEquals(form(n, 2), SparseSmithNormalForm.compute(dense(a)));
     }
 }

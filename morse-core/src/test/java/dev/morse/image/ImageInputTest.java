@@ -10,7 +10,7 @@ import dev.morse.homology.HomologyGroup;
 import dev.morse.io.InputException;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.testing.TestImages;
 import java.io.IOException;
 import java.nio.file.Files;

@@ -1,10 +1,12 @@
 package dev.morse.implicit;
 
+import dev.morse.poset.ChainCounts;
+
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.morse.generate.FaceCounts;
+import dev.morse.complex.FaceCounts;
 import dev.morse.generate.PartitionLattice;
 import dev.morse.poset.Poset;
 import dev.morse.testing.RandomInputs;

@@ -13,7 +13,7 @@ import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
 import dev.morse.matching.MatchingVerdict;
 import dev.morse.matching.MatchingVerifier;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.poset.Poset;
 import java.io.IOException;
 import java.nio.file.Path;

@@ -8,7 +8,7 @@ import dev.morse.complex.ComplexKind;
 import dev.morse.generate.PartitionLattice;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.io.PosetWriter;
-import dev.morse.reduction.ReductionStats;
+import dev.morse.posetreduction.ReductionStats;
 import dev.morse.report.HomologyReport;
 import dev.morse.report.PhaseTiming;
 import java.util.List;

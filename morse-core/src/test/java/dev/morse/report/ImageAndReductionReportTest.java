@@ -6,12 +6,12 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.complex.ComplexKind;
-import dev.morse.complex.CwPosetVerdict;
+import dev.morse.cw.CwPosetVerdict;
 import dev.morse.homology.Coefficients;
 import dev.morse.homology.Homology;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.io.InputFormat;
-import dev.morse.reduction.ReductionStats;
+import dev.morse.posetreduction.ReductionStats;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.util.List;

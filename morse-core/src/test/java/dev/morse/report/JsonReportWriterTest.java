@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.complex.ComplexKind;
-import dev.morse.complex.CwPosetVerdict;
+import dev.morse.cw.CwPosetVerdict;
 import dev.morse.homology.Coefficients;
 import dev.morse.homology.Homology;
 import dev.morse.homology.HomologyGroup;

@@ -1,5 +1,7 @@
 package dev.morse.example;
 
+import dev.morse.cw.CwPosetCheck;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -18,7 +20,7 @@ import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
 import dev.morse.matching.MatchingVerdict;
 import dev.morse.matching.MatchingVerifier;
-import dev.morse.morse.MorseReduction;
+import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.poset.Poset;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -94,7 +96,7 @@ class LowerStarHeuristicTest {
         Poset poset = PosetReader.read(c.path(corpus()));
         complexes.add(OrderComplex.of(poset));
         if (c.cwPoset()) {
-            complexes.add(CellularComplex.of(poset));
+            complexes.add(CwPosetCheck.cellularComplex(poset));
         }
         return complexes;
     }

@@ -9,7 +9,10 @@ import dev.morse.matching.MatchingHeuristic;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
 import dev.morse.morsecomplex.MorseReduction;
-import dev.morse.pipeline.InputLoader;
+import dev.morse.engine.ComplexPolicy;
+import dev.morse.engine.Request;
+import dev.morse.implicit.ElementOrder;
+import dev.morse.input.InputReaders;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
@@ -71,7 +74,8 @@ public class HeuristicBenchmark {
             int side = Integer.parseInt(input.substring(VOXELS.length()));
             cells = ComplexSelector.select(MorseTable.block(side).toPoset(), choice);
         } else {
-            cells = InputLoader.complex(InputLoader.load(Path.of(input)), choice).complex();
+            cells = ComplexPolicy.plan(InputReaders.read(Path.of(input)), Request.defaults().withComplex(choice)
+                    .withPosetReduction(false).withImplicit(ElementOrder.DOWN_SETS, 1L << 60)).stored().orElseThrow();
         }
     }
 

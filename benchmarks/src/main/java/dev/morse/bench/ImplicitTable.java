@@ -1,5 +1,6 @@
 package dev.morse.bench;
 
+import dev.morse.progress.HeapPeaks;
 import dev.morse.generate.BooleanLattice;
 import dev.morse.generate.PartitionLattice;
 import dev.morse.generate.SubspaceLattice;
@@ -54,7 +55,7 @@ public final class ImplicitTable {
         long t0 = System.nanoTime();
         ImplicitHomology.Outcome outcome = ImplicitHomology.run(poset, new ImplicitHomology.Options(order, Coefficients.INTEGERS));
         double engine = (System.nanoTime() - t0) / 1e6;
-        long peak = HeapPeaks.bytes();
+        long peak = HeapPeaks.peakBytes();
         int[] wedge = wedge(args[0]);
         check(outcome.homology(), wedge[0], wedge[1]);
         long chains = Arrays.stream(outcome.cells()).sum();

@@ -1,5 +1,6 @@
 package dev.morse.bench;
 
+import dev.morse.progress.HeapPeaks;
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
 import dev.morse.cw.ComplexSelector;
@@ -67,7 +68,7 @@ public final class MorseTable {
         MorseReduction.Outcome outcome = MorseReduction.run(complex,
                 new MorseReduction.Request(heuristic, MatchingOptions.DEFAULT, Coefficients.INTEGERS, true));
         long t3 = System.nanoTime();
-        long peak = HeapPeaks.bytes();
+        long peak = HeapPeaks.peakBytes();
         if (!outcome.homology().groups().equals(block.expectedHomology())) {
             throw new AssertionError("wrong homology " + outcome.homology() + " for " + block.expectedHomology());
         }

@@ -1,5 +1,6 @@
 package dev.morse.bench;
 
+import dev.morse.progress.HeapPeaks;
 import dev.morse.generate.VoxelBlock;
 import dev.morse.io.PosetReader;
 import dev.morse.poset.Poset;
@@ -32,7 +33,7 @@ public final class ParseTable {
                 long start = System.nanoTime();
                 Poset poset = PosetReader.read(file);
                 long millis = (System.nanoTime() - start) / 1_000_000;
-                long peak = HeapPeaks.bytes();
+                long peak = HeapPeaks.peakBytes();
                 System.gc();
                 Runtime rt = Runtime.getRuntime();
                 long retained = rt.totalMemory() - rt.freeMemory();

@@ -5,20 +5,21 @@ import dev.morse.complex.FaceCounts;
 import dev.morse.generate.Generated;
 import dev.morse.generate.PartitionLattice;
 import dev.morse.io.PosetWriter;
-import dev.morse.pipeline.HomologyOptions;
-import dev.morse.pipeline.HomologyPipeline;
+import dev.morse.engine.Computation;
+import dev.morse.engine.Engines;
+import dev.morse.engine.Request;
+import dev.morse.input.InputReaders;
 import dev.morse.poset.Poset;
 import dev.morse.posetreduction.PosetReduction;
 import dev.morse.posetreduction.ReductionResult;
 import dev.morse.posetreduction.ReductionStats;
-import dev.morse.report.HomologyReport;
-import dev.morse.report.PhaseTiming;
+import dev.morse.engine.PhaseTiming;
 import java.util.Locale;
 
 /**
  * Measures the poset reductions on generated lattices: elements before and after, what removed
  * them, the time of the reduction, the cells of the order complex with and without it, and the
- * time of the whole homology run both ways (through {@link HomologyPipeline} on the poset text,
+ * time of the whole homology run both ways (through {@link Engines} on the poset text,
  * reading included). Prints one Markdown table row per case; each row should have its own JVM
  * (see {@code benchmarks/poset-reduction-table.sh}).
  *
@@ -42,24 +43,24 @@ public final class PosetReductionTable {
         // warm the code paths up on small cases first, so the row measures the work, not the JIT
         String warm = PosetWriter.toText(PartitionLattice.properPart(5));
         for (int i = 0; i < 3; i++) {
-            HomologyPipeline.run("warm", warm, HomologyOptions.defaults());
-            HomologyPipeline.run("warm", warm, HomologyOptions.defaults().withPosetReduction(false));
+            Engines.compute(InputReaders.parse("warm", warm), Request.defaults());
+            Engines.compute(InputReaders.parse("warm", warm), Request.defaults().withPosetReduction(false));
         }
         ReductionResult reduced = PosetReduction.reduce(poset);
         ReductionStats s = reduced.stats();
         long cellsBefore = total(FaceCounts.ofOrderComplex(poset));
         long cellsAfter = total(FaceCounts.ofOrderComplex(reduced.poset()));
         // alternate the two ways three times and keep the fastest of each, to damp the noise of the machine
-        HomologyOptions off = HomologyOptions.defaults().withPosetReduction(false);
+        Request off = Request.defaults().withPosetReduction(false);
         boolean unreducedFits = cellsBefore <= 3_000_000;
-        HomologyReport with = null;
+        Computation with = null;
         double withMs = Double.MAX_VALUE;
         double withoutMs = Double.MAX_VALUE;
         for (int round = 0; round < 3; round++) {
             if (unreducedFits) {
-                withoutMs = Math.min(withoutMs, runMillis(HomologyPipeline.run(family, text, off)));
+                withoutMs = Math.min(withoutMs, runMillis(Engines.compute(InputReaders.parse(family, text), off)));
             }
-            with = HomologyPipeline.run(family, text, HomologyOptions.defaults());
+            with = Engines.compute(InputReaders.parse(family, text), Request.defaults());
             withMs = Math.min(withMs, runMillis(with));
         }
         String without = unreducedFits ? String.format(Locale.ROOT, "%.0f", withoutMs) : "(too large)";
@@ -92,7 +93,7 @@ public final class PosetReductionTable {
     }
 
     /** Milliseconds of the run after reading: reduction, complex, matching and homology. */
-    private static double runMillis(HomologyReport report) {
+    private static double runMillis(Computation report) {
         double ms = 0;
         for (PhaseTiming t : report.timings()) {
             if (!t.phase().equals("read")) {
@@ -102,7 +103,7 @@ public final class PosetReductionTable {
         return ms;
     }
 
-    private static String betti(HomologyReport report) {
+    private static String betti(Computation report) {
         return java.util.Arrays.toString(report.homology().bettiNumbers());
     }
 }

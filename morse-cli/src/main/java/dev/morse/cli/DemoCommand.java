@@ -2,9 +2,11 @@ package dev.morse.cli;
 
 import dev.morse.complex.ComplexChoice;
 import dev.morse.homology.HomologyGroup;
-import dev.morse.pipeline.HomologyOptions;
-import dev.morse.pipeline.HomologyPipeline;
-import dev.morse.report.HomologyReport;
+import dev.morse.engine.Computation;
+import dev.morse.engine.Engines;
+import dev.morse.engine.Request;
+import dev.morse.input.Input;
+import dev.morse.input.InputReaders;
 import dev.morse.report.TextReportWriter;
 import java.io.IOException;
 import java.io.InputStream;
@@ -23,7 +25,7 @@ import picocli.CommandLine.Spec;
  * {@code morse demo}: two short stories on invented data, run through the same pipeline as
  * {@code morse homology}. The inputs live in the jar under {@code demo/}.
  */
-@Command(name = "demo", description = "Shows, on two small invented examples, what morse computes and why.")
+@Command(name = "demo", mixinStandardHelpOptions = true, description = "Shows, on two small invented examples, what morse computes and why.")
 final class DemoCommand implements Callable<Integer> {
     /** The wrapping tile map: a torus cut into 4 x 4 squares, as a face poset. */
     static final String TILE_MAP = "demo/tile-map.poset";
@@ -36,9 +38,6 @@ final class DemoCommand implements Callable<Integer> {
     // read by Failures through the parse result, which is where it matters
     @Option(names = "--debug", description = "Show stack traces of failures.")
     private boolean debug;
-
-    @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
-    private boolean help;
 
     @Override
     public Integer call() {
@@ -58,10 +57,10 @@ final class DemoCommand implements Callable<Integer> {
                 compute on one cell per piece instead of one simplex per chain of pieces.
 
                 """);
-        HomologyOptions options = HomologyOptions.defaults();
-        String map = resource(TILE_MAP);
-        HomologyReport cellular = HomologyPipeline.run(TILE_MAP, map, options);
-        HomologyReport order = HomologyPipeline.run(TILE_MAP, map, options.withComplex(ComplexChoice.ORDER));
+        Request options = Request.defaults();
+        Input map = InputReaders.parse(TILE_MAP, resource(TILE_MAP));
+        Computation cellular = Engines.compute(map, options);
+        Computation order = Engines.compute(map, options.withComplex(ComplexChoice.ORDER));
         indent(text, TextReportWriter.toText(cellular));
         if (!cellular.homology().groups().equals(order.homology().groups())) {
             throw new IllegalStateException("the cellular and the order complex of the tile map disagree: "
@@ -87,7 +86,7 @@ final class DemoCommand implements Callable<Integer> {
 
                 """, order.totalCells(), counts(order), (double) order.totalCells() / cellular.totalCells(),
                 groups(order)));
-        HomologyReport plan = HomologyPipeline.run(RELEASE_PLAN, resource(RELEASE_PLAN), options);
+        Computation plan = Engines.compute(InputReaders.parse(RELEASE_PLAN, resource(RELEASE_PLAN)), options);
         indent(text, TextReportWriter.toText(plan));
         text.append(String.format(Locale.ROOT, """
 
@@ -119,13 +118,13 @@ final class DemoCommand implements Callable<Integer> {
         block.lines().forEach(line -> text.append("    ").append(line).append('\n'));
     }
 
-    private static String counts(HomologyReport report) {
+    private static String counts(Computation report) {
         StringJoiner parts = new StringJoiner(" + ");
         report.cells().forEach(c -> parts.add(Long.toString(c)));
         return parts.toString();
     }
 
-    private static String groups(HomologyReport report) {
+    private static String groups(Computation report) {
         StringJoiner parts = new StringJoiner(", ");
         for (HomologyGroup group : report.homology().groups()) {
             parts.add("H_" + group.dimension() + " = " + TextReportWriter.groupText(group, report.coefficients()));
@@ -133,7 +132,7 @@ final class DemoCommand implements Callable<Integer> {
         return parts.toString();
     }
 
-    private static String bettiNumbers(HomologyReport report) {
+    private static String bettiNumbers(Computation report) {
         StringJoiner parts = new StringJoiner(", ", "[", "]");
         for (int betti : report.homology().bettiNumbers()) {
             parts.add(Integer.toString(betti));

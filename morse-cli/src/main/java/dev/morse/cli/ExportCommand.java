@@ -1,11 +1,12 @@
 package dev.morse.cli;
 
-import dev.morse.complex.ComplexChoice;
-import dev.morse.matching.MatchingHeuristics;
+import dev.morse.engine.Computation;
+import dev.morse.engine.Engines;
+import dev.morse.engine.Request;
 import dev.morse.morsecomplex.MorseComplex;
-import dev.morse.pipeline.ExportOptions;
-import dev.morse.pipeline.MorseComplexExport;
 import dev.morse.report.Counted;
+import dev.morse.report.MorseComplexExport;
+import dev.morse.report.TextReportWriter;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
@@ -16,56 +17,45 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code morse export FILE -o DIR}: the Morse complex's boundary matrices as Matrix Market files. */
-@Command(name = "export",
+@Command(name = "export", mixinStandardHelpOptions = true,
         description = {
             "Writes the boundary matrices of the Morse complex of a matching, one file per dimension d,"
                     + " boundary-d.mtx, in the Matrix Market coordinate format (1-based), with critical-d.txt naming"
-                    + " the critical cells of dimension d in the order of the rows and columns."
+                    + " the critical cells of dimension d in the order of the rows and columns.",
+            "The complex and matching are those homology would use (the implicit engine's own matching for an order"
+                    + " complex generated on demand); the summary ends with the homology, over the coefficients asked for."
         })
 final class ExportCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "FILE", description = "A morse-poset 1 or morse-simplicial 1 file.")
-    private Path file;
+    @Mixin
+    private InputOptions input;
+
+    @Mixin
+    private EngineOptions engine;
+
+    @Mixin
+    private MatchingChoice matching;
+
+    @Mixin
+    private MatchingRuns runs;
 
     @Option(names = {"-o", "--output"}, paramLabel = "DIR", required = true,
             description = "Directory to write into; created if missing.")
     private Path directory;
 
-    @Option(names = "--matching", paramLabel = "NAME", defaultValue = MatchingHeuristics.DEFAULT,
-            converter = OptionConverters.MatchingConverter.class, completionCandidates = OptionConverters.MatchingNames.class,
-            description = "Matching whose Morse complex is written; available: ${COMPLETION-CANDIDATES}"
-                    + " (default ${DEFAULT-VALUE}).")
-    private String matching;
-
-    @Option(names = "--complex", paramLabel = "auto|order|cellular", defaultValue = "auto",
-            converter = OptionConverters.ComplexConverter.class, completionCandidates = OptionConverters.ComplexNames.class,
-            description = "Complex to build from a poset, as for homology (default ${DEFAULT-VALUE}).")
-    private ComplexChoice complex;
-
-    @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
-            description = "Seed of the random matching's choices (default ${DEFAULT-VALUE}).")
-    private long seed;
-
     @Mixin
-    private ProgressOption progress;
-
-    // read by Failures through the parse result, which is where it matters
-    @Option(names = "--debug", description = "Show stack traces of failures.")
-    private boolean debug;
-
-    @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
-    private boolean help;
+    private RunOptions run;
 
     @Override
     public Integer call() throws Exception {
-        MorseComplexExport export = progress.around(spec,
-                () -> MorseComplexExport.build(file, new ExportOptions(complex, matching, seed)));
+        Request request = engine.request(spec, runs, matching.name());
+        Computation computation = run.around(spec, () -> Engines.compute(input.read(spec), request));
+        MorseComplexExport export = MorseComplexExport.of(computation);
         MorseComplex morse = export.morse();
         Map<String, String> files = new LinkedHashMap<>();
         StringBuilder summary = new StringBuilder();
@@ -78,9 +68,11 @@ final class ExportCommand implements Callable<Integer> {
             int rows = d == 0 ? 0 : morse.boundary(d).rows();
             int entries = d == 0 ? 0 : morse.boundary(d).nonZeros();
             summary.append(String.format(Locale.ROOT, "  %-16s %d x %d, %s; %s: %s\n",
-                    MorseComplexExport.matrixFileName(d), rows, morse.cellCount(d), Counted.of(entries, "nonzero entry", "nonzero entries"),
-                    MorseComplexExport.cellsFileName(d), Counted.of(morse.cellCount(d), "critical cell")));
+                    MorseComplexExport.matrixFileName(d), rows, morse.cellCount(d),
+                    Counted.of(entries, "nonzero entry", "nonzero entries"), MorseComplexExport.cellsFileName(d),
+                    Counted.of(morse.cellCount(d), "critical cell")));
         }
+        summary.append("  homology  ").append(TextReportWriter.homologyLine(computation)).append('\n');
         OutputFiles.writeAll(directory, files);
         PrintWriter out = spec.commandLine().getOut();
         out.print(summary);

@@ -17,7 +17,7 @@ import picocli.CommandLine.Spec;
  * {@code morse generate FAMILY ARGS -o FILE}: writes one poset or simplicial complex of a classical
  * family. Each family is one subcommand method; the mathematics is in {@link Families}.
  */
-@Command(name = "generate",
+@Command(name = "generate", mixinStandardHelpOptions = true,
         description = {
             "Writes a poset (morse-poset 1) or a simplicial complex (morse-simplicial 1) of a classical family.",
             "Lattices come whole unless --proper is given; polytopes come as the boundary sphere unless --part says"
@@ -33,8 +33,6 @@ final class GenerateCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
-    private boolean help;
 
     @Override
     public Integer call() {
@@ -42,7 +40,7 @@ final class GenerateCommand implements Callable<Integer> {
                 + String.join(", ", spec.subcommands().keySet()));
     }
 
-    @Command(name = "boolean", description = "The Boolean lattice B_n of subsets of {1..n}; proper part: the"
+    @Command(name = "boolean", mixinStandardHelpOptions = true, description = "The Boolean lattice B_n of subsets of {1..n}; proper part: the"
             + " boundary of the (n-1)-simplex, a sphere S^(n-2).")
     int booleanLattice(@Parameters(paramLabel = "N", description = "The size of the ground set.") int n,
             @Option(names = "--proper", description = PROPER) boolean proper,
@@ -50,7 +48,7 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.booleanLattice(n, proper));
     }
 
-    @Command(name = "simplex", description = "Face poset of the d-simplex.")
+    @Command(name = "simplex", mixinStandardHelpOptions = true, description = "Face poset of the d-simplex.")
     int simplex(@Parameters(paramLabel = "D", description = "The dimension.") int d,
             @Option(names = "--part", paramLabel = "PART", defaultValue = "boundary", description = PART,
                     converter = OptionConverters.FacePartConverter.class) FacePart part,
@@ -58,7 +56,7 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.simplex(d, part));
     }
 
-    @Command(name = "cube", description = "Face poset of the d-cube (faces as words over 0, 1, *).")
+    @Command(name = "cube", mixinStandardHelpOptions = true, description = "Face poset of the d-cube (faces as words over 0, 1, *).")
     int cube(@Parameters(paramLabel = "D", description = "The dimension.") int d,
             @Option(names = "--part", paramLabel = "PART", defaultValue = "boundary", description = PART,
                     converter = OptionConverters.FacePartConverter.class) FacePart part,
@@ -66,7 +64,7 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.cube(d, part));
     }
 
-    @Command(name = "cross", description = "Face poset of the d-dimensional cross-polytope (faces as sign vectors).")
+    @Command(name = "cross", mixinStandardHelpOptions = true, description = "Face poset of the d-dimensional cross-polytope (faces as sign vectors).")
     int cross(@Parameters(paramLabel = "D", description = "The dimension.") int d,
             @Option(names = "--part", paramLabel = "PART", defaultValue = "boundary", description = PART,
                     converter = OptionConverters.FacePartConverter.class) FacePart part,
@@ -74,7 +72,7 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.crossPolytope(d, part));
     }
 
-    @Command(name = "partition", description = "The partition lattice Pi_n; proper part: a wedge of (n-1)! spheres"
+    @Command(name = "partition", mixinStandardHelpOptions = true, description = "The partition lattice Pi_n; proper part: a wedge of (n-1)! spheres"
             + " S^(n-3) (Bjorner 1980).")
     int partition(@Parameters(paramLabel = "N", description = "The size of the ground set.") int n,
             @Option(names = "--proper", description = PROPER) boolean proper,
@@ -82,7 +80,7 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.partitionLattice(n, proper));
     }
 
-    @Command(name = "noncrossing", description = "The noncrossing partition lattice NC_n; proper part: a wedge of"
+    @Command(name = "noncrossing", mixinStandardHelpOptions = true, description = "The noncrossing partition lattice NC_n; proper part: a wedge of"
             + " Catalan(n-1) spheres S^(n-3) (Kreweras 1972).")
     int noncrossing(@Parameters(paramLabel = "N", description = "The size of the ground set.") int n,
             @Option(names = "--proper", description = PROPER) boolean proper,
@@ -90,7 +88,7 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.noncrossingPartitionLattice(n, proper));
     }
 
-    @Command(name = "subspace", description = "The lattice of subspaces of F_q^n (q a prime power); proper part: a"
+    @Command(name = "subspace", mixinStandardHelpOptions = true, description = "The lattice of subspaces of F_q^n (q a prime power); proper part: a"
             + " wedge of q^(n(n-1)/2) spheres S^(n-2) (Solomon-Tits).")
     int subspace(@Parameters(index = "0", paramLabel = "Q", description = "The order of the field.") int q,
             @Parameters(index = "1", paramLabel = "N", description = "The dimension of the space.") int n,
@@ -99,7 +97,7 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.subspaceLattice(q, n, proper));
     }
 
-    @Command(name = "divisor", description = "The divisors of N under divisibility; proper part: the open interval"
+    @Command(name = "divisor", mixinStandardHelpOptions = true, description = "The divisors of N under divisibility; proper part: the open interval"
             + " (1, N).")
     int divisor(@Parameters(paramLabel = "N", description = "The number.") int n,
             @Option(names = "--proper", description = "Write the open interval (1, N).") boolean proper,
@@ -107,20 +105,20 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.divisorLattice(n, proper));
     }
 
-    @Command(name = "projective", description = "The real projective space RP^d: the boundary of the (d+1)-cube"
+    @Command(name = "projective", mixinStandardHelpOptions = true, description = "The real projective space RP^d: the boundary of the (d+1)-cube"
             + " modulo the antipodal map, a CW poset.")
     int projective(@Parameters(paramLabel = "D", description = "The dimension.") int d,
             @Mixin OutputFile output) throws IOException {
         return output.write(() -> Families.projectiveSpace(d));
     }
 
-    @Command(name = "matching", description = "The matching complex of the complete graph K_n (simplicial).")
+    @Command(name = "matching", mixinStandardHelpOptions = true, description = "The matching complex of the complete graph K_n (simplicial).")
     int matching(@Parameters(paramLabel = "N", description = "The number of vertices of K_n.") int n,
             @Mixin OutputFile output) throws IOException {
         return output.write(() -> Families.matchingComplex(n));
     }
 
-    @Command(name = "chessboard", description = "The chessboard complex of non-attacking rooks on an M x N board"
+    @Command(name = "chessboard", mixinStandardHelpOptions = true, description = "The chessboard complex of non-attacking rooks on an M x N board"
             + " (simplicial).")
     int chessboard(@Parameters(index = "0", paramLabel = "M", description = "Rows.") int m,
             @Parameters(index = "1", paramLabel = "N", description = "Columns.") int n,
@@ -128,7 +126,7 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.chessboardComplex(m, n));
     }
 
-    @Command(name = "voxel-block", description = "A solid SIDE^3 block of voxels with straight tunnels and sealed"
+    @Command(name = "voxel-block", mixinStandardHelpOptions = true, description = "A solid SIDE^3 block of voxels with straight tunnels and sealed"
             + " cavities: H = Z, Z^tunnels, Z^cavities, 0.")
     int voxelBlock(@Parameters(paramLabel = "SIDE", description = "Voxels along each axis.") int side,
             @Option(names = "--tunnels", paramLabel = "T", defaultValue = "0", description = "Tunnels (default 0).")
@@ -139,7 +137,7 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.voxelBlock(side, tunnels, cavities));
     }
 
-    @Command(name = "random-voxels", description = "Random pixels or voxels in a box, each present with the given"
+    @Command(name = "random-voxels", mixinStandardHelpOptions = true, description = "Random pixels or voxels in a box, each present with the given"
             + " density.")
     int randomVoxels(@Parameters(paramLabel = "SIZE", description = "The box, like 20,20 or 20,20,20.",
                     converter = OptionConverters.VolumeSizeConverter.class) VolumeSize size,
@@ -151,7 +149,7 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.randomVoxels(size.extents(), density, seed));
     }
 
-    @Command(name = "random-poset", description = "A random poset: each pair i < j of N elements related with the"
+    @Command(name = "random-poset", mixinStandardHelpOptions = true, description = "A random poset: each pair i < j of N elements related with the"
             + " given density, then closed transitively.")
     int randomPoset(@Parameters(paramLabel = "N", description = "The number of elements.") int n,
             @Option(names = "--density", paramLabel = "P", defaultValue = "0.1",

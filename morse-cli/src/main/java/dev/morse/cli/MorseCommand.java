@@ -13,7 +13,7 @@ import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /** The {@code morse} command: exact homology of posets and simplicial complexes. */
-@Command(name = "morse",
+@Command(name = "morse", mixinStandardHelpOptions = true,
         description = "Exact homology of posets (order complexes), CW posets (cellular complexes) and simplicial complexes.",
         subcommands = {HomologyCommand.class, DemoCommand.class,
             InspectCommand.class, CompareCommand.class, DrawCommand.class, ExportCommand.class,
@@ -24,8 +24,6 @@ public final class MorseCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
-    private boolean help;
 
     /** Runs the command line and exits with its exit code. */
     public static void main(String[] args) {
@@ -56,9 +54,17 @@ public final class MorseCommand implements Callable<Integer> {
      */
     public static CommandLine newCommandLine() {
         Failures failures = new Failures();
-        return new CommandLine(new MorseCommand())
+        CommandLine line = new CommandLine(new MorseCommand())
                 .setExecutionExceptionHandler(failures)
                 .setParameterExceptionHandler(failures);
+        withVersion(line, new VersionProvider());
+        return line;
+    }
+
+    /** Gives every command the one version provider, so that {@code --version} answers the same anywhere. */
+    private static void withVersion(CommandLine line, VersionProvider provider) {
+        line.getCommandSpec().versionProvider(provider);
+        line.getSubcommands().values().forEach(sub -> withVersion(sub, provider));
     }
 
     /** Without a subcommand there is nothing to do: a usage error. */

@@ -21,7 +21,7 @@ import picocli.CommandLine.Spec;
  * {@code morse op OPERATION POSET... -o FILE}: builds a new poset from poset files. Each operation
  * is one subcommand method; the mathematics is in {@link PosetOperations}.
  */
-@Command(name = "op",
+@Command(name = "op", mixinStandardHelpOptions = true,
         description = "Builds a new poset file from poset files: product, ordinal sum, dual, intervals, proper part,"
                 + " rank selection, or the face poset of the order complex.",
         synopsisSubcommandLabel = "OPERATION",
@@ -32,8 +32,6 @@ final class OperationCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
-    private boolean help;
 
     @Override
     public Integer call() {
@@ -41,7 +39,7 @@ final class OperationCommand implements Callable<Integer> {
                 + String.join(", ", spec.subcommands().keySet()));
     }
 
-    @Command(name = "product", description = "The product P x Q, ordered componentwise; its order complex is"
+    @Command(name = "product", mixinStandardHelpOptions = true, description = "The product P x Q, ordered componentwise; its order complex is"
             + " homeomorphic to the product of theirs (Walker 1988).")
     int product(@Parameters(index = "0", paramLabel = "P", description = POSET) Path p,
             @Parameters(index = "1", paramLabel = "Q", description = POSET) Path q,
@@ -52,7 +50,7 @@ final class OperationCommand implements Callable<Integer> {
         return output.write(() -> new Generated.OfPoset(made, "the product of " + p + " and " + q));
     }
 
-    @Command(name = "sum", description = "The ordinal sum P + Q: every element of P below every element of Q; its"
+    @Command(name = "sum", mixinStandardHelpOptions = true, description = "The ordinal sum P + Q: every element of P below every element of Q; its"
             + " order complex is the join of theirs. Labels the two share get the prefixes 'a.' and 'b.'.")
     int sum(@Parameters(index = "0", paramLabel = "P", description = "The lower poset file.") Path p,
             @Parameters(index = "1", paramLabel = "Q", description = "The upper poset file.") Path q,
@@ -63,14 +61,14 @@ final class OperationCommand implements Callable<Integer> {
         return output.write(() -> new Generated.OfPoset(made, "the ordinal sum of " + p + " below " + q));
     }
 
-    @Command(name = "dual", description = "The dual poset: the order reversed; the order complex is the same.")
+    @Command(name = "dual", mixinStandardHelpOptions = true, description = "The dual poset: the order reversed; the order complex is the same.")
     int dual(@Parameters(paramLabel = "P", description = POSET) Path p, @Mixin OutputFile output) throws IOException {
         Poset poset = InputFiles.readPoset(p);
         Poset made = checked(p, () -> PosetOperations.dual(poset));
         return output.write(() -> new Generated.OfPoset(made, "the dual of " + p));
     }
 
-    @Command(name = "proper-part", description = "The poset without its least and greatest elements.")
+    @Command(name = "proper-part", mixinStandardHelpOptions = true, description = "The poset without its least and greatest elements.")
     int properPart(@Parameters(paramLabel = "P", description = POSET) Path p, @Mixin OutputFile output)
             throws IOException {
         Poset poset = InputFiles.readPoset(p);
@@ -78,7 +76,7 @@ final class OperationCommand implements Callable<Integer> {
         return output.write(() -> new Generated.OfPoset(made, "the proper part of " + p));
     }
 
-    @Command(name = "closed-interval", description = "The closed interval [X, Y] = {z : X <= z <= Y}.")
+    @Command(name = "closed-interval", mixinStandardHelpOptions = true, description = "The closed interval [X, Y] = {z : X <= z <= Y}.")
     int closedInterval(@Parameters(index = "0", paramLabel = "P", description = POSET) Path p,
             @Parameters(index = "1", paramLabel = "X", description = "The label of the bottom.") String x,
             @Parameters(index = "2", paramLabel = "Y", description = "The label of the top.") String y,
@@ -89,7 +87,7 @@ final class OperationCommand implements Callable<Integer> {
         return output.write(() -> new Generated.OfPoset(made, "the closed interval [" + x + ", " + y + "] of " + p));
     }
 
-    @Command(name = "open-interval", description = "The open interval (X, Y) = {z : X < z < Y}.")
+    @Command(name = "open-interval", mixinStandardHelpOptions = true, description = "The open interval (X, Y) = {z : X < z < Y}.")
     int openInterval(@Parameters(index = "0", paramLabel = "P", description = POSET) Path p,
             @Parameters(index = "1", paramLabel = "X", description = "The label of the element below.") String x,
             @Parameters(index = "2", paramLabel = "Y", description = "The label of the element above.") String y,
@@ -100,7 +98,7 @@ final class OperationCommand implements Callable<Integer> {
         return output.write(() -> new Generated.OfPoset(made, "the open interval (" + x + ", " + y + ") of " + p));
     }
 
-    @Command(name = "rank-select", description = "The elements whose rank lies in RANKS (minimal elements have"
+    @Command(name = "rank-select", mixinStandardHelpOptions = true, description = "The elements whose rank lies in RANKS (minimal elements have"
             + " rank 0), with the order of P.")
     int rankSelect(@Parameters(index = "0", paramLabel = "P", description = POSET) Path p,
             @Parameters(index = "1", paramLabel = "RANKS", description = "Ranks like 1,3 or 1-3 or 0,2-4.",
@@ -111,7 +109,7 @@ final class OperationCommand implements Callable<Integer> {
         return output.write(() -> new Generated.OfPoset(made, "the elements of ranks " + ranks + " of " + p));
     }
 
-    @Command(name = "subdivide", description = "The face poset of the order complex: the chains of P ordered by"
+    @Command(name = "subdivide", mixinStandardHelpOptions = true, description = "The face poset of the order complex: the chains of P ordered by"
             + " inclusion; its order complex is the barycentric subdivision of that of P.")
     int subdivide(@Parameters(paramLabel = "P", description = POSET) Path p, @Mixin OutputFile output)
             throws IOException {

@@ -9,7 +9,8 @@ import java.util.StringJoiner;
 import java.util.TreeSet;
 import dev.morse.homology.Coefficients;
 import dev.morse.implicit.ElementOrder;
-import dev.morse.pipeline.HomologyPipeline;
+import dev.morse.engine.Request;
+import dev.morse.matching.MatchingHeuristics;
 import java.util.Iterator;
 import java.util.List;
 import java.util.stream.Stream;
@@ -73,12 +74,12 @@ final class OptionConverters {
         }
     }
 
-    /** A matching name known to the pipeline. */
+    /** A matching name known to morse-core. */
     static final class MatchingConverter implements ITypeConverter<String> {
         @Override
         public String convert(String value) {
             try {
-                return HomologyPipeline.requireKnownMatching(value);
+                return Request.requireKnownMatching(value);
             } catch (IllegalArgumentException e) {
                 throw new TypeConversionException(e.getMessage());
             }
@@ -89,7 +90,7 @@ final class OptionConverters {
     static final class MatchingNames implements Iterable<String> {
         @Override
         public Iterator<String> iterator() {
-            List<String> names = HomologyPipeline.matchingNames();
+            List<String> names = MatchingHeuristics.names();
             return names.iterator();
         }
     }

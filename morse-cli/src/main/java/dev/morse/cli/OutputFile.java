@@ -27,8 +27,6 @@ final class OutputFile {
     @Option(names = "--debug", description = "Show stack traces of failures.")
     private boolean debug;
 
-    @Option(names = {"-h", "--help"}, usageHelp = true, description = "Show this help and exit.")
-    private boolean help;
 
     /**
      * Makes the input with {@code make} and writes it. Bad arguments of a generator (an

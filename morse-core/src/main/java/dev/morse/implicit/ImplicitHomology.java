@@ -21,6 +21,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
+import dev.morse.morsecomplex.MorseOutcome;
 
 /**
  * Homology of the order complex Δ(P) of any finite poset without storing its chains. P gets a bottom
@@ -99,16 +101,24 @@ public final class ImplicitHomology {
      * @param search what the walk over maximal chains did
      * @param rounds cells left after each round of algebraic reduction
      * @param homology the unreduced homology
-     * @param times milliseconds per phase: {@code chains}, {@code order}, {@code match}, {@code sweep},
-     *     {@code reduce}, {@code homology}
+     * @param times milliseconds per phase: {@code chains} (when not counted before), {@code order},
+     *     {@code match}, {@code sweep}, {@code reduce}, {@code homology}
+     * @param morse the Morse complex before algebraic reduction, or {@code null} when a coefficient
+     *     left the range of a long
+     * @param chains the critical chains, each named by its elements' labels from the bottom up
      */
     public record Outcome(ElementOrder order, long[] cells, int[] critical, SearchStatistics search,
-            List<ReductionRound> rounds, Homology homology, PhaseTimes times) {
+            List<ReductionRound> rounds, Homology homology, PhaseTimes times, MorseComplex morse,
+            CriticalChainNames chains) implements MorseOutcome {
+        /** The name reports give the implicit engine's matching. */
+        public static final String MATCHING = "implicit-lexicographic";
+
         /** Copies. */
         public Outcome {
             cells = cells.clone();
             critical = critical.clone();
             rounds = List.copyOf(rounds);
+            Objects.requireNonNull(chains, "chains");
         }
 
         /** A copy. */
@@ -123,9 +133,19 @@ public final class ImplicitHomology {
             return critical.clone();
         }
 
-        /** Total number of critical chains. */
-        public long totalCritical() {
-            return Arrays.stream(critical).asLongStream().sum();
+        @Override
+        public String matchingName() {
+            return MATCHING;
+        }
+
+        @Override
+        public Optional<MorseComplex> morseComplex() {
+            return Optional.ofNullable(morse);
+        }
+
+        @Override
+        public List<String> criticalCellNames(int dimension) {
+            return chains.names(dimension);
         }
     }
 
@@ -137,20 +157,35 @@ public final class ImplicitHomology {
      *     a sweep visiting too many chains, or an unresolved fibre too large to enumerate
      */
     public static Outcome run(Poset poset, Options options) {
-        return run(poset, options, options.order()::ranks);
+        return run(poset, options, options.order()::ranks, null);
+    }
+
+    /**
+     * As {@link #run(Poset, Options)} with the chains per dimension already counted (by
+     * {@link ChainCounts#perDimension}), so that they are not counted twice.
+     */
+    public static Outcome run(Poset poset, Options options, long[] chainsPerDimension) {
+        return run(poset, options, options.order()::ranks, chainsPerDimension.clone());
     }
 
     /** As {@link #run(Poset, Options)} with covers ordered by any ranking; the options' order is only reported. */
     static Outcome run(Poset poset, Options options, BoundedPoset.Ranking ranking) {
+        return run(poset, options, ranking, null);
+    }
+
+    private static Outcome run(Poset poset, Options options, BoundedPoset.Ranking ranking, long[] counted) {
         Map<String, Double> times = new LinkedHashMap<>();
         long t0 = System.nanoTime();
-        long[] cells;
-        try {
-            cells = ChainCounts.perDimension(poset);
-        } catch (ArithmeticException e) {
-            throw new IllegalStateException("the order complex has more than 2^63 - 1 chains in one dimension");
+        long[] cells = counted;
+        long t1 = t0;
+        if (cells == null) {
+            try {
+                cells = ChainCounts.perDimension(poset);
+            } catch (ArithmeticException e) {
+                throw new IllegalStateException("the order complex has more than 2^63 - 1 chains in one dimension");
+            }
+            t1 = lap(times, "chains", t0);
         }
-        long t1 = lap(times, "chains", t0);
         BoundedPoset bounded = BoundedPoset.of(poset, ranking, Runtime.getRuntime().maxMemory() / 2);
         long t2 = lap(times, "order", t1);
         CriticalChains critical = CriticalChainSearch.run(bounded, options.criticalLimit());
@@ -165,13 +200,15 @@ public final class ImplicitHomology {
         int[] counts = critical.counts(top);
         Homology homology;
         List<ReductionRound> rounds = List.of();
+        MorseComplex morse = null;
         if (matrices.stream().allMatch(MorseMatrix::fitsInLong)) {
             List<SparseIntegerMatrix> boundaries = new ArrayList<>();
             if (top >= 0) {
                 boundaries.add(new SparseIntegerMatrix(0, new int[counts[0] + 1], new int[0], new long[0]));
             }
             matrices.forEach(m -> boundaries.add(m.toSparse()));
-            AlgebraicReduction.Result reduced = AlgebraicReduction.reduce(new MorseComplex(counts, boundaries));
+            morse = new MorseComplex(counts, boundaries);
+            AlgebraicReduction.Result reduced = AlgebraicReduction.reduce(morse);
             rounds = reduced.rounds();
             long t5 = lap(times, "reduce", t4);
             MorseComplex left = reduced.reduced();
@@ -181,7 +218,8 @@ public final class ImplicitHomology {
             homology = denseHomology(counts, matrices, options.coefficients());
             lap(times, "homology", t4);
         }
-        return new Outcome(options.order(), cells, counts, critical.statistics(), rounds, homology, new PhaseTimes(times));
+        return new Outcome(options.order(), cells, counts, critical.statistics(), rounds, homology, new PhaseTimes(times),
+                morse, new CriticalChainNames(critical, bounded));
     }
 
     private static long lap(Map<String, Double> times, String phase, long since) {

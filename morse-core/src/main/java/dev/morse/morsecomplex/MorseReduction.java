@@ -15,6 +15,9 @@ import dev.morse.progress.Progress;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.ArrayList;
+import java.util.Optional;
+import java.util.Arrays;
 
 /**
  * Homology of a chain complex by discrete Morse reduction: match, verify, sweep the gradient into the
@@ -32,35 +35,53 @@ public final class MorseReduction {
     }
 
     /**
-     * Everything a run found.
+     * Everything a run found, keeping the complex, the matching and the Morse complex so that later
+     * questions (exports, pictures, cycles) need no second run.
      *
      * @param heuristic the heuristic's name
-     * @param cells cells per dimension of the complex
-     * @param critical critical cells per dimension of the matching
+     * @param complex the complex that was matched
+     * @param matching the acyclic matching
      * @param verdict the verifier's verdict, or {@code null} when verification was skipped
+     * @param morse the Morse complex before algebraic reduction, or {@code null} when none was built
      * @param rounds counts after each algebraic round (empty for {@code none})
      * @param homology the unreduced homology
      * @param times milliseconds per phase
      */
-    public record Outcome(String heuristic, int[] cells, int[] critical, MatchingVerdict verdict,
-            List<ReductionRound> rounds, Homology homology, PhaseTimes times) {
-        /** Copies arrays and lists. */
+    public record Outcome(String heuristic, ChainComplex complex, Matching matching, MatchingVerdict verdict,
+            MorseComplex morse, List<ReductionRound> rounds, Homology homology, PhaseTimes times)
+            implements MorseOutcome {
+        /** Copies lists. */
         public Outcome {
-            cells = cells.clone();
-            critical = critical.clone();
             rounds = List.copyOf(rounds);
         }
 
-        /** A copy. */
         @Override
-        public int[] cells() {
-            return cells.clone();
+        public String matchingName() {
+            return heuristic;
         }
 
-        /** A copy. */
+        @Override
+        public long[] cells() {
+            return Arrays.stream(complex.cellCounts()).asLongStream().toArray();
+        }
+
         @Override
         public int[] critical() {
-            return critical.clone();
+            return matching.criticalCounts(complex);
+        }
+
+        @Override
+        public Optional<MorseComplex> morseComplex() {
+            return Optional.ofNullable(morse);
+        }
+
+        @Override
+        public List<String> criticalCellNames(int dimension) {
+            List<String> names = new ArrayList<>();
+            for (int c : matching.criticalCells(complex, dimension)) {
+                names.add(complex.cellName(c));
+            }
+            return names;
         }
 
         /**
@@ -73,11 +94,7 @@ public final class MorseReduction {
 
         /** Critical cells beyond the lower bound. */
         public long excess() {
-            long total = 0;
-            for (int m : critical) {
-                total += m;
-            }
-            return total - lowerBound();
+            return totalCritical() - lowerBound();
         }
     }
 
@@ -98,12 +115,11 @@ public final class MorseReduction {
                         + " produced an invalid matching: " + verdict.defect());
             }
         }
-        int[] critical = matching.criticalCounts(complex);
         if (request.heuristic() instanceof NoMatchingHeuristic) {
             long t2 = System.nanoTime();
             Homology homology = HomologyCalculator.compute(complex, request.coefficients());
             times.put("homology", millis(t2, System.nanoTime()));
-            return new Outcome(request.heuristic().name(), complex.cellCounts(), critical, verdict, List.of(), homology,
+            return new Outcome(request.heuristic().name(), complex, matching, verdict, null, List.of(), homology,
                     new PhaseTimes(times));
         }
         long t2 = System.nanoTime();
@@ -116,7 +132,7 @@ public final class MorseReduction {
             long t3 = System.nanoTime();
             Homology homology = HomologyCalculator.compute(complex, request.coefficients());
             times.put("homology on every cell after overflow", millis(t3, System.nanoTime()));
-            return new Outcome(request.heuristic().name(), complex.cellCounts(), critical, verdict, List.of(), homology,
+            return new Outcome(request.heuristic().name(), complex, matching, verdict, null, List.of(), homology,
                     new PhaseTimes(times));
         }
         long t3 = System.nanoTime();
@@ -127,7 +143,7 @@ public final class MorseReduction {
         MorseComplex left = reduced.reduced();
         Homology homology = HomologyCalculator.fromBoundaries(left.cellCounts(), left::boundary, request.coefficients());
         times.put("homology", millis(t4, System.nanoTime()));
-        return new Outcome(request.heuristic().name(), complex.cellCounts(), critical, verdict, reduced.rounds(), homology,
+        return new Outcome(request.heuristic().name(), complex, matching, verdict, morse, reduced.rounds(), homology,
                 new PhaseTimes(times));
     }
 

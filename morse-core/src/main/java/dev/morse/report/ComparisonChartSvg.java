@@ -1,5 +1,8 @@
 package dev.morse.report;
 
+import dev.morse.engine.ComparisonReport;
+import dev.morse.engine.MatchingRun;
+
 import java.util.List;
 
 /**

@@ -1,5 +1,9 @@
 package dev.morse.report;
 
+import dev.morse.engine.ComparisonReport;
+import dev.morse.engine.MatchingRun;
+import dev.morse.engine.PhaseTiming;
+
 import com.fasterxml.jackson.core.JsonGenerator;
 import dev.morse.cw.CwPosetVerdict;
 import java.io.IOException;
@@ -29,7 +33,9 @@ public final class ComparisonJsonWriter {
             JsonStyle.intArray(json, "cells", report.cells());
             writeCwCheck(json, report);
             json.writeStringField("coefficients", "Z");
-            JsonReportWriter.writeHomology(json, report.homology().groups());
+            json.writeStringField("coefficients", report.homology().coefficients().toString());
+            json.writeBooleanField("reduced", report.reducedShown());
+            JsonReportWriter.writeHomology(json, report.shownHomology().groups());
             json.writeStringField("reference_matching", report.referenceMatching());
             json.writeNumberField("morse_lower_bound", report.morseLowerBound());
             JsonStyle.intArray(json, "lower_bound_by_dimension", report.boundByDimension());

@@ -1,5 +1,8 @@
 package dev.morse.report;
 
+import dev.morse.engine.ComparisonReport;
+import dev.morse.engine.MatchingRun;
+
 import dev.morse.homology.Coefficients;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.matching.TrialCount;
@@ -93,8 +96,9 @@ public final class ComparisonTextWriter {
 
     private static String homologyLine(ComparisonReport report) {
         StringJoiner parts = new StringJoiner(", ");
-        for (HomologyGroup g : report.homology().groups()) {
-            parts.add("H_" + g.dimension() + " = " + TextReportWriter.groupText(g, Coefficients.INTEGERS));
+        String prefix = report.reducedShown() ? "~H_" : "H_";
+        for (HomologyGroup g : report.shownHomology().groups()) {
+            parts.add(prefix + g.dimension() + " = " + TextReportWriter.groupText(g, report.homology().coefficients()));
         }
         return parts.length() == 0 ? "none (no cells)" : parts.toString();
     }

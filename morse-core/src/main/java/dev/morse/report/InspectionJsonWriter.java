@@ -2,7 +2,15 @@ package dev.morse.report;
 
 import com.fasterxml.jackson.core.JsonGenerator;
 import dev.morse.inspect.PosetSummary;
+import dev.morse.inspect.ImageInspector;
+import dev.morse.inspect.ImageSummary;
+import dev.morse.inspect.PosetInspector;
+import dev.morse.inspect.SimplicialInspector;
 import dev.morse.inspect.SimplicialSummary;
+import dev.morse.input.FacetInput;
+import dev.morse.input.Input;
+import dev.morse.input.PosetInput;
+import dev.morse.input.VoxelInput;
 import java.io.IOException;
 
 /**
@@ -66,6 +74,34 @@ public final class InspectionJsonWriter {
             json.writeNumberField("euler_characteristic", s.eulerCharacteristic());
             json.writeEndObject();
         });
+    }
+
+    /** The summary of image or volume {@code input} as indented JSON ending with a newline. */
+    public static String toJson(String input, ImageSummary s) {
+        return JsonStyle.toText(json -> {
+            json.writeStartObject();
+            json.writeStringField("input", input);
+            json.writeStringField("format", s.isVolume() ? "volume" : "image");
+            JsonStyle.intArray(json, "size", s.size());
+            json.writeNumberField("slices", s.slices());
+            json.writeNumberField("foreground", s.foreground());
+            json.writeNumberField("threshold", s.threshold());
+            json.writeBooleanField("inverted", s.inverted());
+            JsonStyle.intArray(json, "cells", s.cells());
+            json.writeNumberField("euler_characteristic", s.eulerCharacteristic());
+            json.writeEndObject();
+        });
+    }
+
+    /** The summary of any input as indented JSON ending with a newline. */
+    public static String toJson(Input input) {
+        if (input instanceof PosetInput poset) {
+            return toJson(input.source(), PosetInspector.inspect(poset.poset()));
+        }
+        if (input instanceof FacetInput facets) {
+            return toJson(input.source(), SimplicialInspector.inspect(facets.facets()));
+        }
+        return toJson(input.source(), ImageInspector.inspect(((VoxelInput) input).image()));
     }
 
     private static void verdict(JsonGenerator json, String field, String flag, boolean holds, String reason)

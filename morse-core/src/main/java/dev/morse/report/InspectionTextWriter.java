@@ -1,7 +1,15 @@
 package dev.morse.report;
 
 import dev.morse.inspect.PosetSummary;
+import dev.morse.inspect.ImageInspector;
+import dev.morse.inspect.ImageSummary;
+import dev.morse.inspect.PosetInspector;
+import dev.morse.inspect.SimplicialInspector;
 import dev.morse.inspect.SimplicialSummary;
+import dev.morse.input.FacetInput;
+import dev.morse.input.Input;
+import dev.morse.input.PosetInput;
+import dev.morse.input.VoxelInput;
 import java.math.BigInteger;
 import java.util.List;
 import java.util.Locale;
@@ -56,6 +64,32 @@ public final class InspectionTextWriter {
                 + joined(s.facets(), " + ") + (s.pure() ? "; pure" : "; not pure"));
         row(text, "euler", "Euler characteristic " + s.eulerCharacteristic());
         return text.toString();
+    }
+
+    /** The summary of image or volume {@code input}, as lines of text. */
+    public static String toText(String input, ImageSummary s) {
+        StringBuilder text = new StringBuilder();
+        text.append(input).append(s.isVolume() ? " (volume)\n" : " (image)\n");
+        row(text, "size", joined(s.size(), " x ") + (s.isVolume() ? " voxels" : " pixels")
+                + (s.slices() > 1 ? " from " + s.slices() + " slices" : ""));
+        row(text, "foreground", s.foreground() + " (samples " + (s.inverted() ? "below " : "at or above ")
+                + s.threshold() + ")");
+        row(text, "cells", s.cells().isEmpty() ? "none, the foreground is empty"
+                : "(" + joined(s.cells(), ", ") + "), " + sum(s.cells()) + " elementary cubes in dimensions 0.."
+                        + (s.cells().size() - 1));
+        row(text, "euler", "Euler characteristic " + s.eulerCharacteristic());
+        return text.toString();
+    }
+
+    /** The summary of any input, as lines of text. */
+    public static String toText(Input input) {
+        if (input instanceof PosetInput poset) {
+            return toText(input.source(), PosetInspector.inspect(poset.poset()));
+        }
+        if (input instanceof FacetInput facets) {
+            return toText(input.source(), SimplicialInspector.inspect(facets.facets()));
+        }
+        return toText(input.source(), ImageInspector.inspect(((VoxelInput) input).image()));
     }
 
     private static String levels(PosetSummary s) {

@@ -4,6 +4,10 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import dev.morse.cw.CwPosetVerdict;
+import dev.morse.engine.Computation;
+import dev.morse.engine.ImageFacts;
+import dev.morse.engine.PhaseTiming;
+import dev.morse.implicit.ImplicitHomology;
 import dev.morse.homology.HomologyGroup;
 import java.io.IOException;
 import java.io.StringWriter;
@@ -20,7 +24,7 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * Writes a {@link HomologyReport} as one JSON object with the fields fixed by the design
+ * Writes a {@link Computation} as one JSON object with the fields fixed by the design
  * ({@code complex, cells, matching, critical, coefficients, homology}) and these of ours:
  * {@code input}, {@code format} ({@code poset} or {@code simplicial}), {@code reduced},
  * {@code cw_check} ({@code {"cw_poset": bool}}, with {@code "reason": text} when the check gave
@@ -45,7 +49,7 @@ public final class JsonReportWriter {
     }
 
     /** The report as indented JSON text ending with a newline. */
-    public static String toJson(HomologyReport report) {
+    public static String toJson(Computation report) {
         StringWriter out = new StringWriter();
         try {
             write(report, out);
@@ -56,17 +60,17 @@ public final class JsonReportWriter {
     }
 
     /** Writes the report as indented JSON and a final newline to {@code out}; does not close it. */
-    public static void write(HomologyReport report, Writer out) throws IOException {
+    public static void write(Computation report, Writer out) throws IOException {
         try (JsonGenerator json = FACTORY.createGenerator(out)) {
             json.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
             json.setPrettyPrinter(prettyPrinter());
             json.writeStartObject();
-            json.writeStringField("input", report.input());
+            json.writeStringField("input", report.source());
             json.writeStringField("format", report.format().name().toLowerCase(java.util.Locale.ROOT));
-            json.writeStringField("complex", report.complex().reportName());
-            json.writeStringField("engine", report.engine().name());
+            json.writeStringField("complex", report.complexKind().reportName());
+            json.writeStringField("engine", report.engineName());
             writeIntArray(json, "cells", report.cells());
-            json.writeStringField("matching", report.matching());
+            json.writeStringField("matching", report.matchingName());
             writeIntArray(json, "critical", report.critical());
             json.writeStringField("coefficients", report.coefficients().toString());
             json.writeBooleanField("reduced", report.reduced());
@@ -78,7 +82,7 @@ public final class JsonReportWriter {
                 writeTrials(json, report.trials());
             }
             writeCwCheck(json, report);
-            writeEngine(json, report.engine());
+            writeEngine(json, report);
             if (report.format() == InputFormat.POSET) {
                 writePosetReduction(json, report.posetReduction());
             }
@@ -147,7 +151,7 @@ public final class JsonReportWriter {
         json.writeEndArray();
     }
 
-    private static void writeCwCheck(JsonGenerator json, HomologyReport report) throws IOException {
+    private static void writeCwCheck(JsonGenerator json, Computation report) throws IOException {
         json.writeFieldName("cw_check");
         if (report.cwCheck().isEmpty()) {
             json.writeNull();
@@ -162,14 +166,14 @@ public final class JsonReportWriter {
         json.writeEndObject();
     }
 
-    private static void writeEngine(JsonGenerator json, ComplexEngine engine) throws IOException {
-        if (!engine.reason().isEmpty()) {
-            json.writeStringField("engine_reason", engine.reason());
+    private static void writeEngine(JsonGenerator json, Computation report) throws IOException {
+        if (!report.reason().isEmpty()) {
+            json.writeStringField("engine_reason", report.reason());
         }
-        if (engine.implicit().isPresent()) {
-            ComplexEngine.ImplicitRun run = engine.implicit().get();
+        if (report.implicitRun().isPresent()) {
+            ImplicitHomology.Outcome run = report.implicitRun().get();
             json.writeObjectFieldStart("implicit");
-            json.writeStringField("element_order", run.elementOrder());
+            json.writeStringField("element_order", run.order().optionName());
             json.writeNumberField("chains_walked", run.search().nodes());
             json.writeNumberField("maximal_chains_reached", run.search().facets());
             json.writeNumberField("subtrees_skipped", run.search().skippedSubtrees());

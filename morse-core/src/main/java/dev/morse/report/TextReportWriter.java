@@ -1,6 +1,10 @@
 package dev.morse.report;
 
+import dev.morse.engine.Computation;
+import dev.morse.engine.ImageFacts;
+import dev.morse.engine.PhaseTiming;
 import dev.morse.homology.Coefficients;
+import dev.morse.implicit.ImplicitHomology;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.io.InputFormat;
 import java.math.BigInteger;
@@ -13,7 +17,7 @@ import java.util.Locale;
 import java.util.StringJoiner;
 
 /**
- * Writes a {@link HomologyReport} for people: a short two-column table saying which complex was
+ * Writes a {@link Computation} for people: a short two-column table saying which complex was
  * built and, for a poset, why; its cells, the matching and its critical cells against the Morse lower
  * bound, the cells left after each algebraic round, one line per homology group such as
  * {@code H_1 = Z^2 + Z/2}, and the time each phase took.
@@ -25,9 +29,9 @@ public final class TextReportWriter {
     }
 
     /** The report as lines of text, each ending with a newline. */
-    public static String toText(HomologyReport report) {
+    public static String toText(Computation report) {
         StringBuilder text = new StringBuilder();
-        text.append(String.format(Locale.ROOT, "%s (%s file)\n", report.input(),
+        text.append(String.format(Locale.ROOT, "%s (%s file)\n", report.source(),
                 report.format().name().toLowerCase(Locale.ROOT)));
         row(text, "complex", complexLine(report));
         String choice = choiceLine(report);
@@ -41,7 +45,7 @@ public final class TextReportWriter {
         report.posetReduction().ifPresent(stats -> row(text, "reduction", reductionLine(stats)));
         row(text, "cells", countsLine(report.cells()));
         row(text, "matching", matchingLine(report));
-        report.engine().implicit().ifPresent(run -> row(text, "walk", walkLine(run)));
+        report.implicitRun().ifPresent(run -> row(text, "walk", walkLine(run)));
         row(text, "bound", "Morse lower bound " + report.morseLowerBound() + ", excess " + report.excess());
         for (ReductionRound round : report.rounds()) {
             row(text, "round " + round.round(), round.pairsRemoved() + " pairs removed, left "
@@ -61,6 +65,17 @@ public final class TextReportWriter {
         }
         row(text, "time", timingLine(report.timings()));
         return text.toString();
+    }
+
+    /** The homology of a run on one line, such as {@code coefficients Z: H_0 = Z, H_1 = Z/2}. */
+    public static String homologyLine(Computation report) {
+        StringJoiner groups = new StringJoiner(", ");
+        String prefix = report.reduced() ? "~H_" : "H_";
+        for (HomologyGroup group : report.homology().groups()) {
+            groups.add(prefix + group.dimension() + " = " + groupText(group, report.coefficients()));
+        }
+        return (report.reduced() ? "reduced, " : "") + "coefficients " + report.coefficients() + ": "
+                + (groups.length() == 0 ? "no groups (no cells)" : groups.toString());
     }
 
     /** A homology group over the given coefficients, such as {@code Z^2 + Z/2}, {@code Q^3} or {@code (Z/2)^2}. */
@@ -86,10 +101,10 @@ public final class TextReportWriter {
         text.append(String.format(Locale.ROOT, ROW, label, value));
     }
 
-    private static String complexLine(HomologyReport report) {
-        return switch (report.complex()) {
+    private static String complexLine(Computation report) {
+        return switch (report.complexKind()) {
             case CELLULAR -> "cellular, one cell per element of the poset";
-            case ORDER -> report.engine().isImplicit()
+            case ORDER -> report.implicitRun().isPresent()
                     ? "order complex, one simplex per chain of the poset, chains generated on demand (implicit engine)"
                     : "order complex, one simplex per chain of the poset";
             case SIMPLICIAL -> "simplicial, all faces of the listed faces";
@@ -98,14 +113,14 @@ public final class TextReportWriter {
     }
 
     /** Why this complex was built, when there was a choice. */
-    private static String choiceLine(HomologyReport report) {
+    private static String choiceLine(Computation report) {
         if (report.format() != InputFormat.POSET) {
             return null;
         }
         String cw = report.cwCheck()
                 .map(v -> v.isCwPoset() ? "the poset is a CW poset" : "not a CW poset: " + v.reason())
                 .orElse("chosen without checking for a CW poset");
-        return report.engine().reason().isEmpty() ? cw : cw + "; " + report.engine().reason();
+        return report.reason().isEmpty() ? cw : cw + "; " + report.reason();
     }
 
     private static String imageLine(ImageFacts image) {
@@ -152,16 +167,16 @@ public final class TextReportWriter {
                 : total + " = " + byDimension + " in dimensions 0.." + (counts.size() - 1);
     }
 
-    private static String matchingLine(HomologyReport report) {
+    private static String matchingLine(Computation report) {
         if (report.critical().stream().map(Integer::longValue).toList().equals(report.cells())) {
-            return report.matching() + ", every cell is critical";
+            return report.matchingName() + ", every cell is critical";
         }
-        return report.matching() + ", critical cells " + countsLine(report.critical());
+        return report.matchingName() + ", critical cells " + countsLine(report.critical());
     }
 
-    private static String walkLine(ComplexEngine.ImplicitRun run) {
+    private static String walkLine(ImplicitHomology.Outcome run) {
         return String.format(Locale.ROOT, "element order %s: %d chains from the bottom walked, %d maximal chains"
-                + " reached, %d subtrees skipped, %d defective fibres", run.elementOrder(), run.search().nodes(),
+                + " reached, %d subtrees skipped, %d defective fibres", run.order().optionName(), run.search().nodes(),
                 run.search().facets(), run.search().skippedSubtrees(), run.search().defectiveFacets());
     }
 

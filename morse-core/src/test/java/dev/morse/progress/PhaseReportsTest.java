@@ -5,8 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.complex.ComplexChoice;
 import dev.morse.homology.Coefficients;
-import dev.morse.pipeline.HomologyOptions;
-import dev.morse.pipeline.HomologyPipeline;
+import dev.morse.engine.Request;
+import dev.morse.engine.Runs;
 import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
@@ -27,13 +27,13 @@ class PhaseReportsTest {
             face: ab bc cd da
             """;
 
-    private static Map<String, PhaseRecorder.Phase> run(String text, HomologyOptions options) {
+    private static Map<String, PhaseRecorder.Phase> run(String text, Request options) {
         return run(text, options, new PhaseRecorder());
     }
 
-    private static Map<String, PhaseRecorder.Phase> run(String text, HomologyOptions options, PhaseRecorder recorder) {
+    private static Map<String, PhaseRecorder.Phase> run(String text, Request options, PhaseRecorder recorder) {
         try (ProgressScope scope = Progress.use(recorder)) {
-            HomologyPipeline.run("square.poset", text, options);
+            Runs.run("square.poset", text, options);
         }
         for (PhaseRecorder.Phase p : recorder.phases()) {
             assertTrue(p.total() == 0 || p.largestCount() <= p.total(), p + " counts past its total");
@@ -43,7 +43,7 @@ class PhaseReportsTest {
 
     @Test
     void aMorseReductionReportsEveryPhaseFromReadingToHomology() {
-        Map<String, PhaseRecorder.Phase> phases = run(SQUARE, HomologyOptions.defaults());
+        Map<String, PhaseRecorder.Phase> phases = run(SQUARE, Request.defaults());
         assertEquals(List.of("read", "hasse diagram", "cw check", "match", "verify", "sweep", "reduce", "homology"),
                 List.copyOf(phases.keySet()));
         // 9 elements: 4 corners, 4 sides, 1 face
@@ -54,7 +54,7 @@ class PhaseReportsTest {
 
     @Test
     void theFullSmithNormalFormReportsItsColumns() {
-        HomologyOptions none = new HomologyOptions(ComplexChoice.AUTO, Coefficients.INTEGERS, false, "none");
+        Request none = Runs.request(ComplexChoice.AUTO, Coefficients.INTEGERS, false, "none");
         PhaseRecorder recorder = new PhaseRecorder();
         PhaseRecorder.Phase homology = run(SQUARE, none, recorder).get("homology");
         // columns of ∂_1 and ∂_2: 4 sides and 1 face
@@ -66,7 +66,7 @@ class PhaseReportsTest {
     @Test
     void theOrderComplexReportsItsChains() {
         // without the poset reduction, which would shrink the closed disk to a point first
-        PhaseRecorder.Phase chains = run(SQUARE, HomologyOptions.defaults().withComplex(ComplexChoice.ORDER)
+        PhaseRecorder.Phase chains = run(SQUARE, Request.defaults().withComplex(ComplexChoice.ORDER)
                 .withPosetReduction(false)).get("order complex");
         // chains of the square's face poset: 9 elements, 16 comparable pairs, 8 maximal chains
         assertEquals(33, chains.total());
@@ -74,7 +74,7 @@ class PhaseReportsTest {
 
     @Test
     void thePosetReductionReportsItsElements() {
-        Map<String, PhaseRecorder.Phase> phases = run(SQUARE, HomologyOptions.defaults().withComplex(ComplexChoice.ORDER));
+        Map<String, PhaseRecorder.Phase> phases = run(SQUARE, Request.defaults().withComplex(ComplexChoice.ORDER));
         // up to three sweeps over the 9 elements; the disk has a greatest element, so one point is left
         assertEquals(27, phases.get("poset reduction").total());
         assertEquals(1, phases.get("order complex").total());

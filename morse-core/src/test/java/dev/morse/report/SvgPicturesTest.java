@@ -3,15 +3,16 @@ package dev.morse.report;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.morse.complex.ComplexChoice;
+import dev.morse.engine.ComparisonReport;
+import dev.morse.engine.MatchingRun;
+import dev.morse.engine.Request;
 import dev.morse.homology.Coefficients;
+import dev.morse.input.InputReaders;
 import dev.morse.homology.Homology;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.io.InputFormat;
 import dev.morse.complex.ComplexKind;
 import dev.morse.io.PosetReader;
-import dev.morse.pipeline.DrawOptions;
-import dev.morse.pipeline.DrawingPipeline;
-import dev.morse.pipeline.InputLoader;
 import dev.morse.poset.Poset;
 import java.io.ByteArrayInputStream;
 import java.nio.charset.StandardCharsets;
@@ -63,7 +64,7 @@ class SvgPicturesTest {
         Homology rp2 = new Homology(Coefficients.INTEGERS, false, List.of(HomologyGroup.free(0, 1),
                 new HomologyGroup(1, 0, List.of(java.math.BigInteger.TWO)), HomologyGroup.free(2, 0)));
         ComparisonReport report = new ComparisonReport("rp2.simplicial", InputFormat.SIMPLICIAL, ComplexKind.SIMPLICIAL,
-                List.of(6, 15, 10), Optional.empty(), rp2, "coreduction", List.of(), List.of(
+                List.of(6L, 15L, 10L), Optional.empty(), rp2, false, "coreduction", List.of(), List.of(
                         new MatchingRun("coreduction", List.of(1, 1, 1), List.of(), -1, List.of()),
                         new MatchingRun("none", List.of(6, 15, 10), List.of(), -1, List.of())), 1L);
         Document doc = parse(ComparisonChartSvg.toSvg(report));
@@ -91,14 +92,14 @@ class SvgPicturesTest {
     @Test
     void hasseDiagramHasACirclePerCellALinePerCoverAndThickLinesForMatchedPairs() throws Exception {
         // the square's face poset: 9 elements, 12 covers; coreduction leaves 1 critical cell and 4 pairs
-        HasseDrawing drawing = DrawingPipeline.run(InputLoader.parse("square.poset", """
+        HasseDrawing drawing = HasseDrawings.draw(InputReaders.parse("square.poset", """
                 morse-poset 1
                 ab: a b
                 bc: b c
                 cd: c d
                 da: d a
                 face: ab bc cd da
-                """), new DrawOptions(ComplexChoice.AUTO, "coreduction", 1L));
+                """), Request.defaults());
         Document doc = parse(HasseDiagramSvg.toSvg(drawing));
         assertEquals(9, count(doc, "circle", "node"));
         assertEquals(12, count(doc, "line", null));

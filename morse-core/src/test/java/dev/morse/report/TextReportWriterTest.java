@@ -5,7 +5,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.complex.ComplexKind;
 import dev.morse.cw.CwPosetVerdict;
+import dev.morse.engine.Computation;
 import dev.morse.homology.Coefficients;
+import dev.morse.input.PosetInput;
+import dev.morse.io.PosetReader;
+import java.util.Map;
 import dev.morse.homology.Homology;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.io.InputFormat;
@@ -39,11 +43,12 @@ class TextReportWriterTest {
     @Test
     void orderComplexLineGivesTheReasonTheCellularOneWasNotUsed() {
         // a single edge over one vertex: Δ is a segment, contractible (common practice)
-        Homology homology = new Homology(Coefficients.INTEGERS, true,
-                List.of(HomologyGroup.free(0, 0), HomologyGroup.free(1, 0)));
-        HomologyReport report = new HomologyReport("loop.poset", InputFormat.POSET, ComplexKind.ORDER, List.of(2L, 1L),
-                "none", List.of(2, 1), homology, Optional.of(new CwPosetVerdict(false, "an edge with one end")),
-                List.of());
+        Homology homology = new Homology(Coefficients.INTEGERS, false,
+                List.of(HomologyGroup.free(0, 1), HomologyGroup.free(1, 0)));
+        PosetInput input = new PosetInput("loop.poset", PosetReader.parse("morse-poset 1\nv\ne: v\n", "loop.poset"), 0);
+        Computation report = ReportFixtures.computation(input, ComplexKind.ORDER,
+                Optional.of(new CwPosetVerdict(false, "an edge with one end")), Optional.empty(), "none",
+                new long[] {2, 1}, new int[] {2, 1}, homology, true, 0, Map.of());
         String text = TextReportWriter.toText(report);
         assertTrue(text.contains("  why       not a CW poset: an edge with one end\n"), text);
         assertTrue(text.contains("~H_0 = 0"), text);

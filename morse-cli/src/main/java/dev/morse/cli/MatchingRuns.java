@@ -1,0 +1,30 @@
+package dev.morse.cli;
+
+import picocli.CommandLine.Option;
+
+/** How a matching is run: its seed, how many seeded trials to tally, and whether to verify it. */
+final class MatchingRuns {
+    @Option(names = "--seed", paramLabel = "N", defaultValue = "1",
+            description = "Seed of the random matching's choices, and of the first trial (default ${DEFAULT-VALUE}).")
+    private long seed;
+
+    @Option(names = "--trials", paramLabel = "N", defaultValue = "1",
+            description = "Run the matching N times with seeds from --seed on and report how often each vector of"
+                    + " critical cells occurred.")
+    private int trials;
+
+    @Option(names = "--no-verify", description = "Trust the matching without checking that it is acyclic.")
+    private boolean noVerify;
+
+    long seed() {
+        return seed;
+    }
+
+    int trials() {
+        return trials;
+    }
+
+    boolean verify() {
+        return !noVerify;
+    }
+}

@@ -1,0 +1,142 @@
+package dev.morse.engine;
+
+import dev.morse.homology.Homology;
+import dev.morse.implicit.ElementOrder;
+import dev.morse.input.Input;
+import dev.morse.io.InputException;
+import dev.morse.matching.MatchingHeuristics;
+import dev.morse.progress.HeapPeaks;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+
+/**
+ * Several matchings on one input: the complex is chosen and built once by {@link ComplexPolicy},
+ * exactly as for a homology run, then each matching runs on it with every phase timed and the
+ * approximate peak heap noted. On a stored complex the rows are the matching heuristics; on an
+ * order complex generated on demand, whose matching is the implicit engine's own, they are its
+ * element orders. The first row's homology is the reference; every other must give the same
+ * groups, since any acyclic matching preserves homology (Forman 1998), so a difference is a bug and
+ * raises {@link IllegalStateException}, as does a matching the verifier rejects. Stateless.
+ */
+public final class HeuristicComparison {
+    /** How a row of the implicit engine is named: this prefix and the element order. */
+    public static final String IMPLICIT_ROW = "implicit:";
+
+    private HeuristicComparison() {
+    }
+
+    /** Every built-in heuristic except {@code none}, which is the baseline and is compared only when asked for. */
+    public static List<String> defaultMatchings() {
+        return MatchingHeuristics.builtInNames().stream().filter(n -> !n.equals(Request.NO_MATCHING)).toList();
+    }
+
+    /**
+     * Compares on an input already read.
+     *
+     * @param request the complex, coefficients, seed, trials and the rest; its matching is ignored
+     * @param matchings the matchings to compare in the order to show them, or empty for the defaults
+     * @throws IllegalArgumentException for an unknown or repeated name or an empty list
+     * @throws InputException when matchings are named for an order complex generated on demand,
+     *     which has its own matching, or the input is beyond the chosen engine's limits
+     * @throws IllegalStateException when a matching fails verification or disagrees with the reference
+     */
+    public static ComparisonReport run(Input input, Request request, Optional<List<String>> matchings) {
+        List<String> names = matchings.map(HeuristicComparison::requireComparable).orElseGet(HeuristicComparison::defaultMatchings);
+        ComplexPlan plan = ComplexPolicy.plan(input, request.withMatching(names.contains(Request.NO_MATCHING) ? Request.NO_MATCHING : names.get(0),
+                request.seed(), request.trials()));
+        List<Computation> runs = new ArrayList<>();
+        List<Long> peaks = new ArrayList<>();
+        if (plan.isImplicit()) {
+            if (matchings.isPresent()) {
+                throw new InputException(input.source(), InputException.NO_LINE, "the order complex here is generated"
+                        + " on demand (" + (plan.reason().isEmpty() ? "as asked" : plan.reason()) + "), and that engine"
+                        + " has its own matching, so its element orders are compared instead of named matchings;"
+                        + " --complex order stores the chains for the heuristics");
+            }
+            for (ElementOrder order : ElementOrder.values()) {
+                HeapPeaks.reset();
+                runs.add(plan.engine().run(input, plan, request.withImplicit(order, request.storedChainLimit())));
+                peaks.add(HeapPeaks.peakBytes());
+            }
+        } else {
+            for (String name : names) {
+                HeapPeaks.reset();
+                Request one = request.withMatching(name, request.seed(),
+                        MatchingHeuristics.byName(name).orElseThrow().randomized() ? request.trials() : 1).withVerify(true);
+                runs.add(plan.engine().run(input, plan, one));
+                peaks.add(HeapPeaks.peakBytes());
+            }
+        }
+        Computation reference = runs.get(0);
+        List<MatchingRun> rows = new ArrayList<>();
+        for (int i = 0; i < runs.size(); i++) {
+            Computation run = runs.get(i);
+            String name = plan.isImplicit()
+                    ? IMPLICIT_ROW + run.implicitRun().orElseThrow().order().optionName()
+                    : run.matchingName();
+            requireAgreement(rowName(reference, plan), reference.unreducedHomology(), name, run.unreducedHomology());
+            rows.add(new MatchingRun(name, run.critical(), engineTimings(run), peaks.get(i), run.trials()));
+        }
+        List<PhaseTiming> setup = reference.timings().stream()
+                .filter(t -> t.phase().equals("read") || t.phase().equals("poset reduction") || t.phase().equals("complex"))
+                .toList();
+        return new ComparisonReport(input.source(), input.format(), plan.kind(), reference.cells(), plan.cwCheck(),
+                reference.unreducedHomology(), request.reduced(), rows.get(0).matching(), setup, rows, request.seed());
+    }
+
+    private static String rowName(Computation reference, ComplexPlan plan) {
+        return plan.isImplicit()
+                ? IMPLICIT_ROW + reference.implicitRun().orElseThrow().order().optionName()
+                : reference.matchingName();
+    }
+
+    /** The phases a matching's run owns: what came after the complex was built. */
+    private static List<PhaseTiming> engineTimings(Computation run) {
+        List<PhaseTiming> all = run.timings();
+        int complex = 0;
+        while (complex < all.size() && !all.get(complex).phase().equals("complex")) {
+            complex++;
+        }
+        return all.subList(Math.min(complex + 1, all.size()), all.size());
+    }
+
+    /**
+     * Returns the names if they can be compared: at least one, each known, none twice.
+     *
+     * @throws IllegalArgumentException saying which rule a name breaks
+     */
+    public static List<String> requireComparable(List<String> names) {
+        if (names.isEmpty()) {
+            throw new IllegalArgumentException("name at least one matching to compare");
+        }
+        Set<String> seen = new HashSet<>();
+        for (String name : names) {
+            Request.requireKnownMatching(name);
+            if (!seen.add(name)) {
+                throw new IllegalArgumentException("matching '" + name + "' is named twice");
+            }
+        }
+        return List.copyOf(names);
+    }
+
+    /**
+     * Fails unless two runs found the same homology groups.
+     *
+     * @throws IllegalStateException naming both runs and the first dimension where they differ
+     */
+    static void requireAgreement(String referenceName, Homology reference, String name, Homology found) {
+        if (reference.groups().equals(found.groups())) {
+            return;
+        }
+        int d = 0;
+        while (d < reference.groups().size() && d < found.groups().size()
+                && reference.group(d).equals(found.group(d))) {
+            d++;
+        }
+        throw new IllegalStateException("matchings disagree on the homology: " + referenceName + " gives H" + d
+                + " = " + reference.group(d) + " but " + name + " gives H" + d + " = " + found.group(d));
+    }
+}

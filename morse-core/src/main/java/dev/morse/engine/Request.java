@@ -1,0 +1,124 @@
+package dev.morse.engine;
+
+import dev.morse.complex.ComplexChoice;
+import dev.morse.homology.Coefficients;
+import dev.morse.implicit.ElementOrder;
+import dev.morse.matching.MatchingHeuristics;
+import java.util.Objects;
+
+/**
+ * What a computation should do with an input, whatever the command that asks.
+ *
+ * @param complex which complex to build from a poset; other inputs take only {@code AUTO}
+ * @param coefficients the coefficient ring
+ * @param reduced whether to report reduced homology
+ * @param matching the name of the acyclic matching, one of {@link MatchingHeuristics#names()}
+ * @param seed the seed of the matching's random choices (and of the first trial)
+ * @param trials how many seeded runs of the matching to tally; 1 runs it once
+ * @param verify whether to verify the matching before trusting it
+ * @param posetReduction whether to shrink a poset by homology-preserving reductions before its
+ *     order complex is built (never done when the cellular complex is used)
+ * @param elementOrder the order of covers that fixes the matching of the implicit order complex
+ * @param storedChainLimit the most chains {@link ComplexChoice#AUTO} stores; a poset with more gets
+ *     the implicit order complex
+ * @param maxStoredCells the most cells a stored complex may have before building it is refused
+ *     (pictures ask for few)
+ */
+public record Request(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching, long seed,
+        int trials, boolean verify, boolean posetReduction, ElementOrder elementOrder, long storedChainLimit,
+        long maxStoredCells) {
+    /** The matching name that means no Morse reduction: every cell is critical. */
+    public static final String NO_MATCHING = "none";
+
+    /**
+     * Posets with more chains than this get the implicit order complex under {@link ComplexChoice#AUTO}.
+     * Stored, with its matching and verification, the order complex of the proper part of B_8 (545,834
+     * chains, up to dimension 6) needed about 500 MiB of heap and 4 s (benchmarks/RESULTS.md), so this
+     * keeps the stored complex within about a GiB and ten seconds; beyond it the implicit engine is
+     * far leaner, and on the posets it matches well (lattices with an EL-labelling) also faster.
+     */
+    public static final long DEFAULT_STORED_CHAIN_LIMIT = 1_000_000;
+
+    /**
+     * Validates.
+     *
+     * @throws IllegalArgumentException for an unknown matching name (listing the known ones), fewer
+     *     than one trial, or a limit out of range
+     */
+    public Request {
+        Objects.requireNonNull(complex, "complex");
+        Objects.requireNonNull(coefficients, "coefficients");
+        Objects.requireNonNull(elementOrder, "elementOrder");
+        matching = requireKnownMatching(matching);
+        if (trials < 1) {
+            throw new IllegalArgumentException("trials must be at least 1");
+        }
+        if (storedChainLimit < 0 || storedChainLimit > 1L << 60) {
+            throw new IllegalArgumentException("the stored chain limit must lie in 0..2^60");
+        }
+        if (maxStoredCells < 1) {
+            throw new IllegalArgumentException("the cell limit must be positive");
+        }
+    }
+
+    /** The defaults: automatic choice of complex, integer coefficients, unreduced, the default matching. */
+    public static Request defaults() {
+        return new Request(ComplexChoice.AUTO, Coefficients.INTEGERS, false, MatchingHeuristics.DEFAULT, 1L, 1, true,
+                true, ElementOrder.DOWN_SETS, DEFAULT_STORED_CHAIN_LIMIT, Long.MAX_VALUE);
+    }
+
+    /**
+     * Returns {@code name} if it names a matching.
+     *
+     * @throws IllegalArgumentException naming the available matchings otherwise
+     */
+    public static String requireKnownMatching(String name) {
+        if (name == null || MatchingHeuristics.byName(name).isEmpty()) {
+            throw new IllegalArgumentException("unknown matching '" + name + "'; available: "
+                    + String.join(", ", MatchingHeuristics.names()));
+        }
+        return name;
+    }
+
+    /** This request with another choice of complex. */
+    public Request withComplex(ComplexChoice choice) {
+        return new Request(choice, coefficients, reduced, matching, seed, trials, verify, posetReduction, elementOrder,
+                storedChainLimit, maxStoredCells);
+    }
+
+    /** This request with other coefficients and reduced or unreduced homology. */
+    public Request withHomology(Coefficients ring, boolean reducedHomology) {
+        return new Request(complex, ring, reducedHomology, matching, seed, trials, verify, posetReduction,
+                elementOrder, storedChainLimit, maxStoredCells);
+    }
+
+    /** This request with another matching, seed and number of trials. */
+    public Request withMatching(String name, long seedValue, int trialCount) {
+        return new Request(complex, coefficients, reduced, name, seedValue, trialCount, verify, posetReduction,
+                elementOrder, storedChainLimit, maxStoredCells);
+    }
+
+    /** This request with verification of the matching switched on or off. */
+    public Request withVerify(boolean on) {
+        return new Request(complex, coefficients, reduced, matching, seed, trials, on, posetReduction, elementOrder,
+                storedChainLimit, maxStoredCells);
+    }
+
+    /** This request with poset reduction switched on or off. */
+    public Request withPosetReduction(boolean on) {
+        return new Request(complex, coefficients, reduced, matching, seed, trials, verify, on, elementOrder,
+                storedChainLimit, maxStoredCells);
+    }
+
+    /** This request with another element order and stored chain limit for the implicit order complex. */
+    public Request withImplicit(ElementOrder order, long limit) {
+        return new Request(complex, coefficients, reduced, matching, seed, trials, verify, posetReduction, order, limit,
+                maxStoredCells);
+    }
+
+    /** This request refusing stored complexes of more than {@code cells} cells. */
+    public Request withMaxStoredCells(long cells) {
+        return new Request(complex, coefficients, reduced, matching, seed, trials, verify, posetReduction, elementOrder,
+                storedChainLimit, cells);
+    }
+}

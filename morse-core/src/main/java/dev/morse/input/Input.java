@@ -1,0 +1,18 @@
+package dev.morse.input;
+
+import dev.morse.io.InputFormat;
+
+/**
+ * One input as read, before any complex is built: a poset, a list of faces or the foreground of an
+ * image. Adding a kind of input is adding a record here and an {@link InputReader} that makes it.
+ */
+public sealed interface Input permits PosetInput, FacetInput, VoxelInput {
+    /** The name the input was given by (a file name as typed, or the files of a stack joined by spaces). */
+    String source();
+
+    /** The format it was read in. */
+    InputFormat format();
+
+    /** Milliseconds spent reading it. */
+    double readMillis();
+}

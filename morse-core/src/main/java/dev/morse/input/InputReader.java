@@ -1,0 +1,31 @@
+package dev.morse.input;
+
+import dev.morse.image.ImageOptions;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+
+/**
+ * One input format. Implementations keep no state; {@link InputReaders} holds them in one list,
+ * asks each in turn whether it takes a file, and turns file-system failures into one-line errors,
+ * so a reader reports only what is wrong inside a file.
+ */
+public interface InputReader {
+    /** Whether this reader takes the files described by {@code probe}. */
+    boolean recognises(InputProbe probe);
+
+    /**
+     * Reads the files.
+     *
+     * @throws dev.morse.io.InputException naming the file, and the line where one is to blame
+     * @throws IOException when reading fails for a reason that is not the file's content
+     */
+    Input read(List<Path> files, ImageOptions options) throws IOException;
+
+    /**
+     * Reads text held in memory, for text formats; {@code source} names it in error messages.
+     *
+     * @throws UnsupportedOperationException for formats that are not text
+     */
+    Input parse(String source, String text);
+}

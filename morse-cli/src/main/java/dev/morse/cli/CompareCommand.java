@@ -45,8 +45,8 @@ final class CompareCommand implements Callable<Integer> {
     @Mixin
     private MatchingRuns runs;
 
-    @Option(names = "--json", description = "Print one JSON object instead of a table.")
-    private boolean json;
+    @Mixin
+    private JsonOption output;
 
     @Option(names = "--plot", paramLabel = "FILE.svg",
             description = "Also draw a bar chart of critical cells per dimension and matching, bounds marked, as SVG.")
@@ -67,7 +67,7 @@ final class CompareCommand implements Callable<Integer> {
         }
         ComparisonReport report = run.around(spec, () -> HeuristicComparison.run(input.read(spec), request,
                 Optional.ofNullable(matchings)));
-        String text = json ? ComparisonJsonWriter.toJson(report) : ComparisonTextWriter.toText(report);
+        String text = output.json() ? ComparisonJsonWriter.toJson(report) : ComparisonTextWriter.toText(report);
         if (plot != null) {
             OutputFiles.write(plot, ComparisonChartSvg.toSvg(report));
         }

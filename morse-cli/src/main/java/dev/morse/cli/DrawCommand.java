@@ -29,28 +29,16 @@ final class DrawCommand implements Callable<Integer> {
     private CommandSpec spec;
 
     @Mixin
-    private InputOptions input;
-
-    @Mixin
-    private EngineOptions engine;
-
-    @Mixin
-    private MatchingChoice matching;
-
-    @Mixin
-    private MatchingRuns runs;
+    private ComputationOptions computation;
 
     @Option(names = {"-o", "--output"}, paramLabel = "OUT.svg",
             description = "Write the picture to this file and print a summary; without it the SVG goes to standard output.")
     private Path output;
 
-    @Mixin
-    private RunOptions run;
-
     @Override
     public Integer call() throws Exception {
-        Request request = engine.request(spec, runs, matching.name());
-        HasseDrawing drawing = run.around(spec, () -> HasseDrawings.draw(input.read(spec), request));
+        Request request = computation.request(spec);
+        HasseDrawing drawing = computation.around(spec, () -> HasseDrawings.draw(computation.read(spec), request));
         String svg = HasseDiagramSvg.toSvg(drawing);
         PrintWriter out = spec.commandLine().getOut();
         if (output == null) {

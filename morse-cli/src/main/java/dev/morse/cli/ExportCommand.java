@@ -1,8 +1,6 @@
 package dev.morse.cli;
 
 import dev.morse.engine.Computation;
-import dev.morse.engine.Engines;
-import dev.morse.engine.Request;
 import dev.morse.morsecomplex.MorseComplex;
 import dev.morse.report.Counted;
 import dev.morse.report.MorseComplexExport;
@@ -33,29 +31,16 @@ final class ExportCommand implements Callable<Integer> {
     private CommandSpec spec;
 
     @Mixin
-    private InputOptions input;
-
-    @Mixin
-    private EngineOptions engine;
-
-    @Mixin
-    private MatchingChoice matching;
-
-    @Mixin
-    private MatchingRuns runs;
+    private ComputationOptions computation;
 
     @Option(names = {"-o", "--output"}, paramLabel = "DIR", required = true,
             description = "Directory to write into; created if missing.")
     private Path directory;
 
-    @Mixin
-    private RunOptions run;
-
     @Override
     public Integer call() throws Exception {
-        Request request = engine.request(spec, runs, matching.name());
-        Computation computation = run.around(spec, () -> Engines.compute(input.read(spec), request));
-        MorseComplexExport export = MorseComplexExport.of(computation);
+        Computation result = computation.compute(spec);
+        MorseComplexExport export = MorseComplexExport.of(result);
         MorseComplex morse = export.morse();
         Map<String, String> files = new LinkedHashMap<>();
         StringBuilder summary = new StringBuilder();
@@ -72,7 +57,7 @@ final class ExportCommand implements Callable<Integer> {
                     Counted.of(entries, "nonzero entry", "nonzero entries"), MorseComplexExport.cellsFileName(d),
                     Counted.of(morse.cellCount(d), "critical cell")));
         }
-        summary.append("  homology  ").append(TextReportWriter.homologyLine(computation)).append('\n');
+        summary.append("  homology  ").append(TextReportWriter.homologyLine(result)).append('\n');
         OutputFiles.writeAll(directory, files);
         PrintWriter out = spec.commandLine().getOut();
         out.print(summary);

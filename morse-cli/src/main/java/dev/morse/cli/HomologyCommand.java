@@ -1,8 +1,6 @@
 package dev.morse.cli;
 
 import dev.morse.engine.Computation;
-import dev.morse.engine.Engines;
-import dev.morse.engine.Request;
 import dev.morse.report.JsonReportWriter;
 import dev.morse.report.TextReportWriter;
 import java.io.PrintWriter;
@@ -29,29 +27,16 @@ final class HomologyCommand implements Callable<Integer> {
     private CommandSpec spec;
 
     @Mixin
-    private InputOptions input;
+    private ComputationOptions computation;
 
     @Mixin
-    private EngineOptions engine;
-
-    @Mixin
-    private MatchingChoice matching;
-
-    @Mixin
-    private MatchingRuns runs;
-
-    @Option(names = "--json", description = "Print one JSON object instead of a table.")
-    private boolean json;
-
-    @Mixin
-    private RunOptions run;
+    private JsonOption output;
 
     @Override
     public Integer call() throws Exception {
-        Request request = engine.request(spec, runs, matching.name());
-        Computation computation = run.around(spec, () -> Engines.compute(input.read(spec), request));
+        Computation result = computation.compute(spec);
         PrintWriter out = spec.commandLine().getOut();
-        out.print(json ? JsonReportWriter.toJson(computation) : TextReportWriter.toText(computation));
+        out.print(output.json() ? JsonReportWriter.toJson(result) : TextReportWriter.toText(result));
         out.flush();
         return 0;
     }

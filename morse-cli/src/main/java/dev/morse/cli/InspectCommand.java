@@ -30,8 +30,8 @@ final class InspectCommand implements Callable<Integer> {
     @Mixin
     private InputOptions input;
 
-    @Option(names = "--json", description = "Print one JSON object instead of a table.")
-    private boolean json;
+    @Mixin
+    private JsonOption output;
 
     @Mixin
     private RunOptions run;
@@ -41,7 +41,7 @@ final class InspectCommand implements Callable<Integer> {
         String text = run.around(spec, () -> {
             Input read = input.read(spec);
             try {
-                return json ? InspectionJsonWriter.toJson(read) : InspectionTextWriter.toText(read);
+                return output.json() ? InspectionJsonWriter.toJson(read) : InspectionTextWriter.toText(read);
             } catch (IllegalStateException e) {
                 // the complexes refuse to build past their cell limits with this exception, before allocating
                 throw new InputException(read.source(), InputException.NO_LINE, "too large to compute: " + e.getMessage());

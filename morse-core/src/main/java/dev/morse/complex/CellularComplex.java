@@ -1,6 +1,5 @@
 package dev.morse.complex;
 
-
 import dev.morse.poset.Adjacency;
 import dev.morse.poset.Poset;
 
@@ -15,21 +14,16 @@ import dev.morse.poset.Poset;
  * <p>Memory: 12 bytes per cell (element, cell and boundary offset) plus 8 bytes per cover, and
  * as much again for the coboundary once requested; the poset itself is shared.
  */
-public final class CellularComplex implements ChainComplex {
+public final class CellularComplex extends StoredComplex {
     private final Poset poset;
-    private final GradedCells cells;
     private final int[] elementOfCell;
     private final int[] cellOfElement;
-    private final Boundary boundary;
-    private final CoboundaryCache coboundary;
 
     private CellularComplex(Poset poset, GradedCells cells, int[] elementOfCell, int[] cellOfElement, Boundary boundary) {
+        super(ComplexKind.CELLULAR, cells, boundary);
         this.poset = poset;
-        this.cells = cells;
         this.elementOfCell = elementOfCell;
         this.cellOfElement = cellOfElement;
-        this.boundary = boundary;
-        this.coboundary = new CoboundaryCache(boundary);
     }
 
     /**
@@ -86,26 +80,6 @@ public final class CellularComplex implements ChainComplex {
     /** The cell of poset element {@code element}. */
     public int cell(int element) {
         return cellOfElement[element];
-    }
-
-    @Override
-    public ComplexKind kind() {
-        return ComplexKind.CELLULAR;
-    }
-
-    @Override
-    public GradedCells grading() {
-        return cells;
-    }
-
-    @Override
-    public Boundary boundary() {
-        return boundary;
-    }
-
-    @Override
-    public Boundary coboundary() {
-        return coboundary.get();
     }
 
     /** The element's label. */

@@ -8,11 +8,7 @@ import java.util.function.IntFunction;
  * complexes users build themselves. Memory: that of its {@link Boundary}, plus the coboundary once
  * requested.
  */
-public final class ListedComplex implements ChainComplex {
-    private final ComplexKind kind;
-    private final GradedCells cells;
-    private final Boundary boundary;
-    private final CoboundaryCache coboundary;
+public final class ListedComplex extends StoredComplex {
     private final IntFunction<String> names;
 
     /**
@@ -22,35 +18,8 @@ public final class ListedComplex implements ChainComplex {
      * @param names a short name for each cell
      */
     public ListedComplex(ComplexKind kind, GradedCells cells, Boundary boundary, IntFunction<String> names) {
-        if (boundary.cellCount() != cells.cellCount()) {
-            throw new IllegalArgumentException("the boundary has " + boundary.cellCount() + " rows for "
-                    + cells.cellCount() + " cells");
-        }
-        this.kind = kind;
-        this.cells = cells;
-        this.boundary = boundary;
-        this.coboundary = new CoboundaryCache(boundary);
+        super(kind, cells, boundary);
         this.names = names;
-    }
-
-    @Override
-    public ComplexKind kind() {
-        return kind;
-    }
-
-    @Override
-    public GradedCells grading() {
-        return cells;
-    }
-
-    @Override
-    public Boundary boundary() {
-        return boundary;
-    }
-
-    @Override
-    public Boundary coboundary() {
-        return coboundary.get();
     }
 
     @Override

@@ -14,22 +14,17 @@ import java.util.Arrays;
  * again for the coboundary once it is requested. Building needs, for a while, 4 bytes per
  * comparable pair (the up-sets) and 4 bytes per cell (the prefix tree of chains).
  */
-public final class OrderComplex implements ChainComplex {
+public final class OrderComplex extends StoredComplex {
     /** The default bound on the number of cells: every cell id must be an int. */
     public static final long DEFAULT_CELL_LIMIT = CellLimits.MAX_ARRAY;
 
     private final Poset poset;
-    private final GradedCells cells;
     private final int[][] chains;
-    private final Boundary boundary;
-    private final CoboundaryCache coboundary;
 
     private OrderComplex(Poset poset, GradedCells cells, int[][] chains, Boundary boundary) {
+        super(ComplexKind.ORDER, cells, boundary);
         this.poset = poset;
-        this.cells = cells;
         this.chains = chains;
-        this.boundary = boundary;
-        this.coboundary = new CoboundaryCache(boundary);
     }
 
     /**
@@ -61,44 +56,13 @@ public final class OrderComplex implements ChainComplex {
 
     /** The chain's elements, ascending in the order (bottom first). A copy. */
     public int[] chain(int cell) {
-        int d = cells.dimensionOf(cell);
-        int local = cell - cells.firstCell(d);
-        return Arrays.copyOfRange(chains[d], local * (d + 1), (local + 1) * (d + 1));
-    }
-
-    @Override
-    public ComplexKind kind() {
-        return ComplexKind.ORDER;
-    }
-
-    @Override
-    public GradedCells grading() {
-        return cells;
-    }
-
-    @Override
-    public Boundary boundary() {
-        return boundary;
-    }
-
-    @Override
-    public Boundary coboundary() {
-        return coboundary.get();
+        return tupleIn(chains, cell);
     }
 
     /** The chain's labels joined bottom first, like {@code a<b<c}. */
     @Override
     public String cellName(int cell) {
-        int d = cells.dimensionOf(cell);
-        int at = (cell - cells.firstCell(d)) * (d + 1);
-        StringBuilder name = new StringBuilder();
-        for (int i = 0; i <= d; i++) {
-            if (i > 0) {
-                name.append('<');
-            }
-            name.append(poset.label(chains[d][at + i]));
-        }
-        return name.toString();
+        return tupleName(chains, cell, poset::label, "", '<', "");
     }
 
     /** The chain itself, so lexicographic matchings follow chains. */

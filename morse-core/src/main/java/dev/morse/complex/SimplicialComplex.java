@@ -16,22 +16,17 @@ import java.util.Arrays;
  * {@code 4 + 8(d+1)} for its boundary row, {@code 12(d+1) + 4} bytes in all, and about as much
  * again for the coboundary once it is requested.
  */
-public final class SimplicialComplex implements ChainComplex {
+public final class SimplicialComplex extends StoredComplex {
     /** The default bound on the number of cells: every cell id must be an int. */
     public static final long DEFAULT_CELL_LIMIT = CellLimits.MAX_ARRAY;
 
     private final Facets facets;
-    private final GradedCells cells;
     private final int[][] simplices;
-    private final Boundary boundary;
-    private final CoboundaryCache coboundary;
 
     private SimplicialComplex(Facets facets, GradedCells cells, int[][] simplices, Boundary boundary) {
+        super(ComplexKind.SIMPLICIAL, cells, boundary);
         this.facets = facets;
-        this.cells = cells;
         this.simplices = simplices;
-        this.boundary = boundary;
-        this.coboundary = new CoboundaryCache(boundary);
     }
 
     /**
@@ -157,44 +152,13 @@ public final class SimplicialComplex implements ChainComplex {
 
     /** The simplex's vertex ids, ascending. A copy. */
     public int[] simplex(int cell) {
-        int d = cells.dimensionOf(cell);
-        int local = cell - cells.firstCell(d);
-        return Arrays.copyOfRange(simplices[d], local * (d + 1), (local + 1) * (d + 1));
-    }
-
-    @Override
-    public ComplexKind kind() {
-        return ComplexKind.SIMPLICIAL;
-    }
-
-    @Override
-    public GradedCells grading() {
-        return cells;
-    }
-
-    @Override
-    public Boundary boundary() {
-        return boundary;
-    }
-
-    @Override
-    public Boundary coboundary() {
-        return coboundary.get();
+        return tupleIn(simplices, cell);
     }
 
     /** The vertex labels in braces, ascending by vertex id, like <code>{a b c}</code>. */
     @Override
     public String cellName(int cell) {
-        int d = cells.dimensionOf(cell);
-        int at = (cell - cells.firstCell(d)) * (d + 1);
-        StringBuilder name = new StringBuilder("{");
-        for (int i = 0; i <= d; i++) {
-            if (i > 0) {
-                name.append(' ');
-            }
-            name.append(facets.vertexLabel(simplices[d][at + i]));
-        }
-        return name.append('}').toString();
+        return tupleName(simplices, cell, facets::vertexLabel, "{", ' ', "}");
     }
 
     /** The vertex ids, so lexicographic matchings follow simplices. */

@@ -20,9 +20,7 @@ public final class BooleanLattice {
 
     /** All {@code 2^n} subsets of {@code {1..n}}; a subset covers the subsets with one element fewer. */
     public static Poset lattice(int n) {
-        if (n < 0 || n > MAX_N) {
-            throw new IllegalArgumentException("n must be in 0.." + MAX_N + ", got " + n);
-        }
+        Sizes.inRange("n", n, 0, MAX_N);
         PosetBuilder b = new PosetBuilder();
         for (int mask = 0; mask < (1 << n); mask++) {
             b.element(subsetLabel(mask));

@@ -50,9 +50,7 @@ public final class CrossPolytopeFaces {
     }
 
     private static Poset build(int d, boolean withWhole, boolean withEmpty) {
-        if (d < 1 || d > MAX_DIMENSION) {
-            throw new IllegalArgumentException("dimension must be in 1.." + MAX_DIMENSION + ", got " + d);
-        }
+        Sizes.inRange("dimension", d, 1, MAX_DIMENSION);
         int words = 1;
         for (int i = 0; i < d; i++) {
             words *= 3;

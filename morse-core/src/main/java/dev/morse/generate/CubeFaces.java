@@ -47,9 +47,7 @@ public final class CubeFaces {
     }
 
     private static Poset build(int d, boolean withCube, boolean withEmpty) {
-        if (d < 1 || d > MAX_DIMENSION) {
-            throw new IllegalArgumentException("dimension must be in 1.." + MAX_DIMENSION + ", got " + d);
-        }
+        Sizes.inRange("dimension", d, 1, MAX_DIMENSION);
         int faces = 1;
         for (int i = 0; i < d; i++) {
             faces *= 3;

@@ -21,9 +21,7 @@ public final class DivisorLattice {
 
     /** All divisors of {@code n}. */
     public static Poset lattice(int n) {
-        if (n < 1 || n > MAX_N) {
-            throw new IllegalArgumentException("N must be in 1.." + MAX_N + ", got " + n);
-        }
+        Sizes.inRange("N", n, 1, MAX_N);
         IntArrayList divisors = new IntArrayList();
         for (int d = 1; (long) d * d <= n; d++) {
             if (n % d == 0) {

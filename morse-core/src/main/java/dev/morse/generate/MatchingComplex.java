@@ -21,9 +21,7 @@ public final class MatchingComplex {
 
     /** The maximal matchings of {@code K_n}, {@code n ≥ 2}, one facet each. */
     public static Facets facets(int n) {
-        if (n < 2 || n > MAX_N) {
-            throw new IllegalArgumentException("n must be in 2.." + MAX_N + ", got " + n);
-        }
+        Sizes.inRange("n", n, 2, MAX_N);
         List<List<String>> out = new ArrayList<>();
         extend(new boolean[n + 1], 1, n % 2, new ArrayList<>(), out);
         return Facets.ofLabels(out);

@@ -26,9 +26,7 @@ public final class PartitionLattice {
 
     /** All set partitions of {@code {1..n}}, {@code n ≥ 1}. */
     public static Poset lattice(int n) {
-        if (n < 1 || n > MAX_N) {
-            throw new IllegalArgumentException("n must be in 1.." + MAX_N + ", got " + n);
-        }
+        Sizes.inRange("n", n, 1, MAX_N);
         List<int[]> partitions = new ArrayList<>();
         growthStrings(new int[n], 0, 0, partitions);
         PosetBuilder b = new PosetBuilder();

@@ -23,9 +23,7 @@ public final class ProjectiveSpace {
 
     /** The face poset of {@code RP^d}, {@code d ≥ 1}, from the boundary of the (d+1)-cube. */
     public static Poset antipodalCubeQuotient(int d) {
-        if (d < 1 || d > MAX_DIMENSION) {
-            throw new IllegalArgumentException("dimension must be in 1.." + MAX_DIMENSION + ", got " + d);
-        }
+        Sizes.inRange("dimension", d, 1, MAX_DIMENSION);
         Poset sphere = CubeFaces.boundaryFacePoset(d + 1);
         PosetBuilder b = new PosetBuilder();
         for (int x : sphere.linearExtension()) {

@@ -26,9 +26,7 @@ public final class RandomPoset {
      *     [0, 1], or too many expected relations
      */
     public static Poset of(int n, double density, long seed) {
-        if (n < 0 || n > MAX_N) {
-            throw new IllegalArgumentException("n must be in 0.." + MAX_N + ", got " + n);
-        }
+        Sizes.inRange("n", n, 0, MAX_N);
         if (!(density >= 0 && density <= 1)) {
             throw new IllegalArgumentException("the density must be in [0, 1], got " + density);
         }

@@ -19,8 +19,8 @@ import java.util.Optional;
  * Stateless.
  */
 public final class InputReaders {
-    private static final List<InputReader> READERS = List.of(new ImageFileReader(), new PosetFileReader(),
-            new SimplicialFileReader());
+    private static final List<InputReader> READERS = List.of(new ImageFileReader(), TextFileReader.POSETS,
+            TextFileReader.FACES);
 
     private InputReaders() {
     }

@@ -1,8 +1,6 @@
 package dev.morse.input;
 
-import dev.morse.io.InputFormat;
 import dev.morse.poset.Poset;
-import java.util.Objects;
 
 /**
  * A poset file as read; it stands for the order complex of the poset.
@@ -12,14 +10,4 @@ import java.util.Objects;
  * @param readMillis milliseconds spent reading
  */
 public record PosetInput(String source, Poset poset, double readMillis) implements Input {
-    /** Validates. */
-    public PosetInput {
-        Objects.requireNonNull(source, "source");
-        Objects.requireNonNull(poset, "poset");
-    }
-
-    @Override
-    public InputFormat format() {
-        return InputFormat.POSET;
-    }
 }

@@ -1,8 +1,6 @@
 package dev.morse.input;
 
 import dev.morse.image.LoadedImage;
-import dev.morse.io.InputFormat;
-import java.util.Objects;
 
 /**
  * An image or volume as read: the foreground pixels or voxels; it stands for their cubical complex.
@@ -12,14 +10,4 @@ import java.util.Objects;
  * @param readMillis milliseconds spent reading
  */
 public record VoxelInput(String source, LoadedImage image, double readMillis) implements Input {
-    /** Validates. */
-    public VoxelInput {
-        Objects.requireNonNull(source, "source");
-        Objects.requireNonNull(image, "image");
-    }
-
-    @Override
-    public InputFormat format() {
-        return image.isVolume() ? InputFormat.VOLUME : InputFormat.IMAGE;
-    }
 }

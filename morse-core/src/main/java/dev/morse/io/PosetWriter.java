@@ -33,12 +33,6 @@ public final class PosetWriter {
 
     /** The poset as text. */
     public static String toText(Poset poset) {
-        StringWriter out = new StringWriter();
-        try {
-            write(poset, out);
-        } catch (IOException e) {
-            throw new AssertionError("a string writer does not fail", e);
-        }
-        return out.toString();
+        return TextOutput.render(w -> write(poset, w));
     }
 }

@@ -27,12 +27,6 @@ public final class SimplicialWriter {
 
     /** The faces as text. */
     public static String toText(Facets facets) {
-        StringWriter out = new StringWriter();
-        try {
-            write(facets, out);
-        } catch (IOException e) {
-            throw new AssertionError("a string writer does not fail", e);
-        }
-        return out.toString();
+        return TextOutput.render(w -> write(facets, w));
     }
 }

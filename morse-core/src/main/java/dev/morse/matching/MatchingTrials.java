@@ -31,11 +31,7 @@ public final class MatchingTrials {
         for (int t = 0; t < trials; t++) {
             progress.begin("trial " + (t + 1) + " of " + trials, "cells", complex.cellCount());
             Matching matching = heuristic.match(complex, new MatchingOptions(seed + t));
-            MatchingVerdict verdict = MatchingVerifier.verify(complex, matching);
-            if (!verdict.valid()) {
-                throw new IllegalStateException("heuristic " + heuristic.name() + " produced an invalid matching with seed "
-                        + (seed + t) + ": " + verdict.defect());
-            }
+            MatchingVerifier.requireValid(complex, matching, heuristic, seed + t);
             List<Integer> vector = Arrays.stream(matching.criticalCounts(complex)).boxed().toList();
             tally.merge(vector, 1, Integer::sum);
         }

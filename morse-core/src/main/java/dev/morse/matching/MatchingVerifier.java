@@ -17,6 +17,23 @@ public final class MatchingVerifier {
     private MatchingVerifier() {
     }
 
+    /**
+     * Verifies a heuristic's matching and fails when it is not a valid acyclic matching: a defect in
+     * the heuristic, never in the input, so the one place that says so for every caller.
+     *
+     * @param seed the seed it was made with, named in the message
+     * @throws IllegalStateException naming the heuristic, the seed and the defect
+     */
+    public static MatchingVerdict requireValid(ChainComplex complex, Matching matching, MatchingHeuristic heuristic,
+            long seed) {
+        MatchingVerdict verdict = verify(complex, matching);
+        if (!verdict.valid()) {
+            throw new IllegalStateException("heuristic " + heuristic.name() + " produced an invalid matching with seed "
+                    + seed + ": " + verdict.defect());
+        }
+        return verdict;
+    }
+
     /** Verifies {@code matching} on {@code complex}. */
     public static MatchingVerdict verify(ChainComplex complex, Matching matching) {
         int n = complex.cellCount();

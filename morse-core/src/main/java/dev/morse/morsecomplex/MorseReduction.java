@@ -108,12 +108,8 @@ public final class MorseReduction {
         times.put("match", millis(t0, t1));
         MatchingVerdict verdict = null;
         if (request.verify()) {
-            verdict = MatchingVerifier.verify(complex, matching);
+            verdict = MatchingVerifier.requireValid(complex, matching, request.heuristic(), request.options().seed());
             times.put("verify", millis(t1, System.nanoTime()));
-            if (!verdict.valid()) {
-                throw new IllegalStateException("heuristic " + request.heuristic().name()
-                        + " produced an invalid matching: " + verdict.defect());
-            }
         }
         if (request.heuristic() instanceof NoMatchingHeuristic) {
             long t2 = System.nanoTime();

@@ -31,7 +31,7 @@ public final class ComparisonJsonWriter {
             json.writeStringField("format", report.format().name().toLowerCase(Locale.ROOT));
             json.writeStringField("complex", report.complex().reportName());
             JsonStyle.intArray(json, "cells", report.cells());
-            writeCwCheck(json, report);
+            JsonReportWriter.writeCwCheck(json, report.cwCheck());
             json.writeStringField("coefficients", "Z");
             json.writeStringField("coefficients", report.homology().coefficients().toString());
             json.writeBooleanField("reduced", report.reducedShown());
@@ -68,21 +68,6 @@ public final class ComparisonJsonWriter {
         json.writeNumberField("peak_heap_bytes", run.peakHeapBytes());
         if (!run.trials().isEmpty()) {
             JsonReportWriter.writeTrials(json, run.trials());
-        }
-        json.writeEndObject();
-    }
-
-    private static void writeCwCheck(JsonGenerator json, ComparisonReport report) throws IOException {
-        json.writeFieldName("cw_check");
-        if (report.cwCheck().isEmpty()) {
-            json.writeNull();
-            return;
-        }
-        CwPosetVerdict verdict = report.cwCheck().get();
-        json.writeStartObject();
-        json.writeBooleanField("cw_poset", verdict.isCwPoset());
-        if (!verdict.isCwPoset()) {
-            json.writeStringField("reason", verdict.reason());
         }
         json.writeEndObject();
     }

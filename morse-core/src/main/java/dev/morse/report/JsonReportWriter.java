@@ -1,5 +1,6 @@
 package dev.morse.report;
 
+import dev.morse.io.TextOutput;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
@@ -50,13 +51,7 @@ public final class JsonReportWriter {
 
     /** The report as indented JSON text ending with a newline. */
     public static String toJson(Computation report) {
-        StringWriter out = new StringWriter();
-        try {
-            write(report, out);
-        } catch (IOException e) {
-            throw new UncheckedIOException("a string writer does not fail", e);
-        }
-        return out.toString();
+        return TextOutput.render(w -> write(report, w));
     }
 
     /** Writes the report as indented JSON and a final newline to {@code out}; does not close it. */
@@ -81,7 +76,7 @@ public final class JsonReportWriter {
             if (!report.trials().isEmpty()) {
                 writeTrials(json, report.trials());
             }
-            writeCwCheck(json, report);
+            writeCwCheck(json, report.cwCheck());
             writeEngine(json, report);
             if (report.format() == InputFormat.POSET) {
                 writePosetReduction(json, report.posetReduction());
@@ -151,13 +146,14 @@ public final class JsonReportWriter {
         json.writeEndArray();
     }
 
-    private static void writeCwCheck(JsonGenerator json, Computation report) throws IOException {
+    /** {@code cw_check}: the verdict, with its reason when it gave one, or null when no check was made. */
+    static void writeCwCheck(JsonGenerator json, Optional<CwPosetVerdict> check) throws IOException {
         json.writeFieldName("cw_check");
-        if (report.cwCheck().isEmpty()) {
+        if (check.isEmpty()) {
             json.writeNull();
             return;
         }
-        CwPosetVerdict verdict = report.cwCheck().get();
+        CwPosetVerdict verdict = check.get();
         json.writeStartObject();
         json.writeBooleanField("cw_poset", verdict.isCwPoset());
         if (!verdict.reason().isEmpty()) {

@@ -1,5 +1,6 @@
 package dev.morse.report;
 
+import dev.morse.io.TextOutput;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.util.DefaultIndenter;
@@ -30,13 +31,7 @@ final class JsonStyle {
 
     /** Indented JSON text from {@code body}, ending with a newline. */
     static String toText(Body body) {
-        StringWriter out = new StringWriter();
-        try {
-            write(out, body);
-        } catch (IOException e) {
-            throw new UncheckedIOException("a string writer does not fail", e);
-        }
-        return out.toString();
+        return TextOutput.render(w -> write(w, body));
     }
 
     /** Writes {@code body} as indented JSON and a final newline to {@code out}; does not close it. */

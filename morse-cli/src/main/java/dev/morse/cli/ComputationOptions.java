@@ -1,0 +1,52 @@
+package dev.morse.cli;
+
+import dev.morse.engine.Computation;
+import dev.morse.engine.Engines;
+import dev.morse.engine.Request;
+import dev.morse.input.Input;
+import java.io.IOException;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+
+/**
+ * Everything a command that runs one computation is told: the input, the engine, the one
+ * matching and how to run, as {@code morse homology} takes them. Commands that draw or export the computation
+ * take the very same options, so that they show what homology computed.
+ */
+final class ComputationOptions {
+    @Mixin
+    private InputOptions input;
+
+    @Mixin
+    private EngineOptions engine;
+
+    @Mixin
+    private MatchingChoice matching;
+
+    @Mixin
+    private MatchingRuns runs;
+
+    @Mixin
+    private RunOptions run;
+
+    /** Reads the input; see {@link InputOptions#read}. */
+    Input read(CommandSpec spec) throws IOException {
+        return input.read(spec);
+    }
+
+    /** The request the options make; see {@link EngineOptions#request}. */
+    Request request(CommandSpec spec) {
+        return engine.request(spec, runs, matching.name());
+    }
+
+    /** Runs {@code work} with the progress line, unless {@code --quiet}. */
+    <T> T around(CommandSpec spec, java.util.concurrent.Callable<T> work) throws Exception {
+        return run.around(spec, work);
+    }
+
+    /** Reads the input and computes, with the progress line. */
+    Computation compute(CommandSpec spec) throws Exception {
+        Request request = request(spec);
+        return run.around(spec, () -> Engines.compute(read(spec), request));
+    }
+}

@@ -1,7 +1,7 @@
 package dev.morse.bench;
 
+import dev.morse.poset.ChainCounts;
 import dev.morse.generate.Families;
-import dev.morse.complex.FaceCounts;
 import dev.morse.generate.Generated;
 import dev.morse.generate.PartitionLattice;
 import dev.morse.io.PosetWriter;
@@ -48,8 +48,8 @@ public final class PosetReductionTable {
         }
         ReductionResult reduced = PosetReduction.reduce(poset);
         ReductionStats s = reduced.stats();
-        long cellsBefore = total(FaceCounts.ofOrderComplex(poset));
-        long cellsAfter = total(FaceCounts.ofOrderComplex(reduced.poset()));
+        long cellsBefore = total(ChainCounts.perDimension(poset));
+        long cellsAfter = total(ChainCounts.perDimension(reduced.poset()));
         // alternate the two ways three times and keep the fastest of each, to damp the noise of the machine
         Request off = Request.defaults().withPosetReduction(false);
         boolean unreducedFits = cellsBefore <= 3_000_000;

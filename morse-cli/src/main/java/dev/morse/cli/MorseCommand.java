@@ -8,7 +8,6 @@ import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
@@ -23,7 +22,6 @@ import picocli.CommandLine.Spec;
 public final class MorseCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
-
 
     /** Runs the command line and exits with its exit code. */
     public static void main(String[] args) {

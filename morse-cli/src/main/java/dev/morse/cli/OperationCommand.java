@@ -1,5 +1,6 @@
 package dev.morse.cli;
 
+import dev.morse.complex.Subdivision;
 import dev.morse.generate.Generated;
 import dev.morse.poset.PosetOperations;
 import dev.morse.io.InputException;
@@ -11,7 +12,6 @@ import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import java.util.function.Supplier;
 import picocli.CommandLine.ParameterException;
@@ -31,7 +31,6 @@ final class OperationCommand implements Callable<Integer> {
 
     @Spec
     private CommandSpec spec;
-
 
     @Override
     public Integer call() {
@@ -114,7 +113,7 @@ final class OperationCommand implements Callable<Integer> {
     int subdivide(@Parameters(paramLabel = "P", description = POSET) Path p, @Mixin OutputFile output)
             throws IOException {
         Poset poset = InputFiles.readPoset(p);
-        Poset made = checked(p, () -> PosetOperations.subdivision(poset));
+        Poset made = checked(p, () -> Subdivision.of(poset));
         return output.write(() -> new Generated.OfPoset(made, "the chains of " + p + " ordered by inclusion"));
     }
 

@@ -3,7 +3,6 @@ package dev.morse.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.morse.complex.ComplexChoice;
 import dev.morse.homology.SmithInvariants;
 import dev.morse.homology.SparseSmithNormalForm;
 import dev.morse.homology.SparseIntegerMatrix;

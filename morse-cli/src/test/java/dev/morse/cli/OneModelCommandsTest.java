@@ -18,7 +18,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -299,8 +298,6 @@ class OneModelCommandsTest {
     }
 
     @Test
-    @Disabled("bug: report.ComparisonJsonWriter.toJson writes the field \"coefficients\" twice, first always \"Z\","
-            + " then the coefficients asked for")
     void compareJsonNamesEachFieldOnce() throws IOException {
         CliRun run = CliRun.morse("compare", "--json", "--coefficients", "3", corpus("boolean-3-proper.poset"));
         assertEquals(0, run.code(), run.err());

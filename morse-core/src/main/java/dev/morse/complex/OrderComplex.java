@@ -1,7 +1,6 @@
 package dev.morse.complex;
 
 import dev.morse.poset.Poset;
-import java.util.Arrays;
 
 /**
  * The order complex Δ(P) of a poset: one simplex per nonempty chain {@code x0 < x1 < ... < xd},

@@ -168,11 +168,7 @@ public final class Computation {
 
     /** Cells per dimension of the matched complex (longs: a generated order complex may have more than 2^31). */
     public List<Long> cells() {
-        List<Long> cells = new ArrayList<>();
-        for (long c : outcome.cells()) {
-            cells.add(c);
-        }
-        return cells;
+        return java.util.Arrays.stream(outcome.cells()).boxed().toList();
     }
 
     /** Total number of cells. */
@@ -187,11 +183,7 @@ public final class Computation {
 
     /** Critical cells per dimension of the matching; equal to {@link #cells()} for {@code none}. */
     public List<Integer> critical() {
-        List<Integer> critical = new ArrayList<>();
-        for (int m : outcome.critical()) {
-            critical.add(m);
-        }
-        return critical;
+        return java.util.Arrays.stream(outcome.critical()).boxed().toList();
     }
 
     /** Total number of critical cells. */

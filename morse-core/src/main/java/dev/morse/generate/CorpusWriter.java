@@ -1,5 +1,6 @@
 package dev.morse.generate;
 
+import dev.morse.poset.ChainCounts;
 import dev.morse.complex.FaceCounts;
 
 import dev.morse.complex.Facets;
@@ -53,7 +54,7 @@ public final class CorpusWriter {
                 Poset p = entry.poset().get();
                 size.put("elements", (long) p.size());
                 size.put("covers", (long) p.coverCount());
-                cells = FaceCounts.ofOrderComplex(p);
+                cells = ChainCounts.perDimension(p);
                 body = PosetWriter.toText(p);
             } else {
                 Facets f = entry.facets().get();

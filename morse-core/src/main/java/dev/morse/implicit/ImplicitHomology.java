@@ -16,7 +16,6 @@ import dev.morse.morsecomplex.ReductionRound;
 import dev.morse.poset.Poset;
 import java.math.BigInteger;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;

@@ -3,6 +3,7 @@ package dev.morse.inspect;
 import dev.morse.cw.CwPosetCheck;
 import dev.morse.cw.CwPosetVerdict;
 import dev.morse.complex.FaceCounts;
+import dev.morse.poset.ChainCounts;
 import dev.morse.poset.Mobius;
 import dev.morse.poset.Poset;
 import dev.morse.poset.StrictDownSets;
@@ -62,7 +63,7 @@ public final class PosetInspector {
             return new PosetSummary(n, poset.coverCount(), minimal, maximal, rankSizes, poset.isGraded(), thin, verdict,
                     List.of(), "not counted: " + tooMany.getMessage() + ", more than this inspection holds", null);
         }
-        List<BigInteger> chains = FaceCounts.chainCounts(poset, downSets);
+        List<BigInteger> chains = ChainCounts.exact(poset);
         BigInteger mobius = Mobius.withBoundsAdjoined(poset, downSets);
         PosetSummary summary = new PosetSummary(n, poset.coverCount(), minimal, maximal, rankSizes, poset.isGraded(),
                 thin, verdict, chains, "", mobius);

@@ -3,7 +3,6 @@ package dev.morse.io;
 import dev.morse.poset.Adjacency;
 import dev.morse.poset.Poset;
 import java.io.IOException;
-import java.io.StringWriter;
 import java.io.Writer;
 
 /**

@@ -2,7 +2,6 @@ package dev.morse.io;
 
 import dev.morse.complex.Facets;
 import java.io.IOException;
-import java.io.StringWriter;
 import java.io.Writer;
 
 /** Writes listed faces in the {@code morse-simplicial 1} format, one face per line. */

@@ -112,11 +112,7 @@ public final class MorseReduction {
             times.put("verify", millis(t1, System.nanoTime()));
         }
         if (request.heuristic() instanceof NoMatchingHeuristic) {
-            long t2 = System.nanoTime();
-            Homology homology = HomologyCalculator.compute(complex, request.coefficients());
-            times.put("homology", millis(t2, System.nanoTime()));
-            return new Outcome(request.heuristic().name(), complex, matching, verdict, null, List.of(), homology,
-                    new PhaseTimes(times));
+            return onEveryCell(complex, matching, verdict, request, times, "homology");
         }
         long t2 = System.nanoTime();
         MorseComplex morse;
@@ -125,11 +121,7 @@ public final class MorseReduction {
         } catch (ArithmeticException overflow) {
             // a Morse coefficient left the range of long: answer exactly on every cell instead
             times.put("sweep", millis(t2, System.nanoTime()));
-            long t3 = System.nanoTime();
-            Homology homology = HomologyCalculator.compute(complex, request.coefficients());
-            times.put("homology on every cell after overflow", millis(t3, System.nanoTime()));
-            return new Outcome(request.heuristic().name(), complex, matching, verdict, null, List.of(), homology,
-                    new PhaseTimes(times));
+            return onEveryCell(complex, matching, verdict, request, times, "homology on every cell after overflow");
         }
         long t3 = System.nanoTime();
         times.put("sweep", millis(t2, t3));
@@ -140,6 +132,16 @@ public final class MorseReduction {
         Homology homology = HomologyCalculator.fromBoundaries(left.cellCounts(), left::boundary, request.coefficients());
         times.put("homology", millis(t4, System.nanoTime()));
         return new Outcome(request.heuristic().name(), complex, matching, verdict, morse, reduced.rounds(), homology,
+                new PhaseTimes(times));
+    }
+
+    /** The Smith normal form on every cell, timed as {@code phase}: the baseline, and the way out of an overflow. */
+    private static Outcome onEveryCell(ChainComplex complex, Matching matching, MatchingVerdict verdict,
+            Request request, Map<String, Double> times, String phase) {
+        long start = System.nanoTime();
+        Homology homology = HomologyCalculator.compute(complex, request.coefficients());
+        times.put(phase, millis(start, System.nanoTime()));
+        return new Outcome(request.heuristic().name(), complex, matching, verdict, null, List.of(), homology,
                 new PhaseTimes(times));
     }
 

@@ -1,8 +1,9 @@
 package dev.morse.poset;
 
-import dev.morse.poset.Adjacency;
-import dev.morse.poset.Poset;
+import java.math.BigInteger;
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
 
 /**
  * Counts the nonempty chains of a poset, the cells of its order complex, without listing them: one
@@ -41,6 +42,46 @@ public final class ChainCounts {
             }
         }
         return total;
+    }
+
+    /**
+     * Nonempty chains by dimension, exactly however many: counted in longs by
+     * {@link #perDimension} and, should a count overflow, counted again in BigInteger by the same pass.
+     */
+    public static List<BigInteger> exact(Poset poset) {
+        try {
+            List<BigInteger> exact = new ArrayList<>();
+            for (long c : perDimension(poset)) {
+                exact.add(BigInteger.valueOf(c));
+            }
+            return exact;
+        } catch (ArithmeticException overflow) {
+            return inBigIntegers(poset);
+        }
+    }
+
+    private static List<BigInteger> inBigIntegers(Poset poset) {
+        BigInteger[] total = new BigInteger[poset.maxHeight() + 1];
+        Arrays.fill(total, BigInteger.ZERO);
+        BigInteger[][] ending = new BigInteger[poset.size()][];
+        DownSearch search = new DownSearch(poset);
+        for (int x : poset.linearExtension()) {
+            BigInteger[] mine = new BigInteger[poset.height(x) + 1];
+            Arrays.fill(mine, BigInteger.ZERO);
+            mine[0] = BigInteger.ONE;
+            int count = search.below(x);
+            for (int t = 0; t < count; t++) {
+                BigInteger[] theirs = ending[search.found(t)];
+                for (int d = 0; d < theirs.length; d++) {
+                    mine[d + 1] = mine[d + 1].add(theirs[d]);
+                }
+            }
+            ending[x] = mine;
+            for (int d = 0; d < mine.length; d++) {
+                total[d] = total[d].add(mine[d]);
+            }
+        }
+        return List.of(total);
     }
 
     /**

@@ -1,8 +1,5 @@
 package dev.morse.poset;
 
-import dev.morse.poset.Adjacency;
-import dev.morse.poset.Poset;
-
 /**
  * For every element of a poset, the set of elements strictly below it, as a bit set. Built in one
  * pass over a linear extension. Memory: n²/8 bytes for n elements, so meant for posets of at most a

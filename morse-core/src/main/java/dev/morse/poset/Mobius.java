@@ -1,7 +1,5 @@
 package dev.morse.poset;
 
-import dev.morse.poset.Poset;
-import dev.morse.poset.StrictDownSets;
 import java.math.BigInteger;
 
 /**

@@ -1,18 +1,11 @@
 package dev.morse.poset;
 
-import dev.morse.poset.Adjacency;
-import dev.morse.poset.Poset;
-import dev.morse.poset.PosetBuilder;
-
 /**
  * Constructions of new posets from old: product, ordinal sum, dual, proper part, intervals,
- * rank selection, the face poset of the order complex, relabelling. Most results are built from
+ * rank selection, relabelling (the face poset of the order complex is dev.morse.complex.Subdivision). Most results are built from
  * covers only, since those constructions know their covers.
  */
 public final class PosetOperations {
-    /** The most chains {@link #subdivision} lists. */
-    public static final long MAX_CHAINS = 5_000_000;
-
     private PosetOperations() {
     }
 
@@ -155,38 +148,6 @@ public final class PosetOperations {
         return b.buildKnownAcyclic();
     }
 
-    /**
-     * The face poset of the order complex Δ(P): the nonempty chains of P ordered by inclusion,
-     * each chain covering the chains with one element fewer. Each chain is labelled by its
-     * elements' labels bottom first, joined by {@code <} (like {@code a<b<c}). Its order complex is
-     * the barycentric subdivision of Δ(P), homeomorphic to it (common practice; e.g. Munkres,
-     * Elements of Algebraic Topology, 1984, §15), and it is a CW poset.
-     *
-     * @throws IllegalArgumentException if P has more than {@link #MAX_CHAINS} chains, or if two
-     *     chains get the same label (possible only when labels contain {@code <})
-     */
-    public static Poset subdivision(Poset p) {
-        dev.morse.complex.OrderComplex complex;
-        try {
-            complex = dev.morse.complex.OrderComplex.of(p, MAX_CHAINS);
-        } catch (IllegalStateException e) {
-            throw new IllegalArgumentException("too many chains for their face poset: " + e.getMessage());
-        }
-        PosetBuilder b = new PosetBuilder();
-        for (int c = 0; c < complex.cellCount(); c++) {
-            b.element(complex.cellName(c));
-        }
-        if (b.size() != complex.cellCount()) {
-            throw new IllegalArgumentException("two chains get the same label; labels containing '<' are ambiguous here");
-        }
-        dev.morse.complex.Boundary boundary = complex.boundary();
-        for (int c = 0; c < complex.cellCount(); c++) {
-            for (int i = boundary.start(c); i < boundary.end(c); i++) {
-                b.relate(boundary.target(i), c, 0);
-            }
-        }
-        return b.buildKnownAcyclic();
-    }
 
     /**
      * The element labelled {@code label}.

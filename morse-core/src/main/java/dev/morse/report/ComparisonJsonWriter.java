@@ -5,14 +5,13 @@ import dev.morse.engine.MatchingRun;
 import dev.morse.engine.PhaseTiming;
 
 import com.fasterxml.jackson.core.JsonGenerator;
-import dev.morse.cw.CwPosetVerdict;
 import java.io.IOException;
 import java.util.Locale;
 
 /**
  * Writes a {@link ComparisonReport} as one JSON object: {@code input}, {@code format},
  * {@code complex}, {@code cells}, {@code cw_check} (as in homology reports), {@code coefficients}
- * (always {@code "Z"}), {@code homology}, {@code reference_matching} (whose run gave it),
+ * (those asked for), {@code reduced}, {@code homology}, {@code reference_matching} (whose run gave it),
  * {@code morse_lower_bound}, {@code lower_bound_by_dimension}, {@code seed}, {@code timings_ms}
  * ({@code read}, {@code complex}) and {@code matchings}: one object per heuristic with
  * {@code matching}, {@code critical}, {@code total}, {@code excess}, {@code timings_ms},
@@ -32,7 +31,6 @@ public final class ComparisonJsonWriter {
             json.writeStringField("complex", report.complex().reportName());
             JsonStyle.intArray(json, "cells", report.cells());
             JsonReportWriter.writeCwCheck(json, report.cwCheck());
-            json.writeStringField("coefficients", "Z");
             json.writeStringField("coefficients", report.homology().coefficients().toString());
             json.writeBooleanField("reduced", report.reducedShown());
             JsonReportWriter.writeHomology(json, report.shownHomology().groups());

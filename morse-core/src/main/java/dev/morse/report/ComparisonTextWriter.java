@@ -3,7 +3,6 @@ package dev.morse.report;
 import dev.morse.engine.ComparisonReport;
 import dev.morse.engine.MatchingRun;
 
-import dev.morse.homology.Coefficients;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.matching.TrialCount;
 import java.util.ArrayList;

@@ -11,8 +11,6 @@ import dev.morse.engine.PhaseTiming;
 import dev.morse.implicit.ImplicitHomology;
 import dev.morse.homology.HomologyGroup;
 import java.io.IOException;
-import java.io.StringWriter;
-import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.math.BigDecimal;
 import java.math.BigInteger;

@@ -4,14 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.morse.complex.ComplexChoice;
 import dev.morse.complex.ComplexKind;
 import dev.morse.homology.Coefficients;
 import dev.morse.homology.Homology;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.matching.TrialCount;
-import dev.morse.engine.ComparisonReport;
-import dev.morse.engine.MatchingRun;
 import java.math.BigInteger;
 import java.util.List;
 import java.util.Optional;

@@ -12,7 +12,6 @@ import dev.morse.complex.ComplexKind;
 import dev.morse.homology.Coefficients;
 import dev.morse.io.InputException;
 import dev.morse.io.InputFormat;
-import dev.morse.engine.PhaseTiming;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;

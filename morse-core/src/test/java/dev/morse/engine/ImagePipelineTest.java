@@ -9,7 +9,6 @@ import dev.morse.image.ImageOptions;
 import dev.morse.image.VolumeSize;
 import dev.morse.io.InputException;
 import dev.morse.io.InputFormat;
-import dev.morse.engine.ImageFacts;
 import dev.morse.testing.TestImages;
 import java.io.IOException;
 import java.nio.file.Path;

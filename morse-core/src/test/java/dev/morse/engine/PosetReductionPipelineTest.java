@@ -9,7 +9,6 @@ import dev.morse.generate.PartitionLattice;
 import dev.morse.homology.HomologyGroup;
 import dev.morse.io.PosetWriter;
 import dev.morse.posetreduction.ReductionStats;
-import dev.morse.engine.PhaseTiming;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 

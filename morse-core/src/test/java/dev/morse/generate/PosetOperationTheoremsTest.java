@@ -1,6 +1,7 @@
 package dev.morse.generate;
 
-import dev.morse.complex.FaceCounts;
+import dev.morse.complex.Subdivision;
+import dev.morse.poset.ChainCounts;
 import dev.morse.poset.Mobius;
 import dev.morse.poset.PosetOperations;
 
@@ -98,8 +99,8 @@ class PosetOperationTheoremsTest {
         for (Poset p : posets) {
             Poset dual = PosetOperations.dual(p);
             assertEquals(homology(p), homology(dual));
-            assertEquals(java.util.Arrays.toString(FaceCounts.ofOrderComplex(p)),
-                    java.util.Arrays.toString(FaceCounts.ofOrderComplex(dual)));
+            assertEquals(java.util.Arrays.toString(ChainCounts.perDimension(p)),
+                    java.util.Arrays.toString(ChainCounts.perDimension(dual)));
         }
     }
 
@@ -227,9 +228,9 @@ class PosetOperationTheoremsTest {
             posets.add(RandomInputs.poset(random, 9, 0.3));
         }
         for (Poset p : posets) {
-            Poset sd = PosetOperations.subdivision(p);
+            Poset sd = Subdivision.of(p);
             long chains = 0;
-            for (long f : FaceCounts.ofOrderComplex(p)) {
+            for (long f : ChainCounts.perDimension(p)) {
                 chains += f;
             }
             assertEquals(chains, sd.size(), "one element per chain");

@@ -3,7 +3,6 @@ package dev.morse.io;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.morse.complex.CellularComplex;
 import dev.morse.complex.ChainComplex;
 import dev.morse.cw.CwPosetCheck;
 import dev.morse.complex.Facets;

@@ -5,7 +5,6 @@ import dev.morse.cw.CwPosetCheck;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.morse.complex.CellularComplex;
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
 import dev.morse.cw.ComplexSelector;

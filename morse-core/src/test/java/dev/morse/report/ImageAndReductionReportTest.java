@@ -17,7 +17,6 @@ import dev.morse.input.VoxelInput;
 import dev.morse.io.PosetReader;
 import dev.morse.homology.Homology;
 import dev.morse.homology.HomologyGroup;
-import dev.morse.io.InputFormat;
 import dev.morse.posetreduction.ReductionStats;
 import java.math.BigDecimal;
 import java.math.BigInteger;

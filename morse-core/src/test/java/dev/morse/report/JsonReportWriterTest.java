@@ -14,7 +14,6 @@ import dev.morse.io.PosetReader;
 import dev.morse.io.SimplicialReader;
 import dev.morse.homology.Homology;
 import dev.morse.homology.HomologyGroup;
-import dev.morse.io.InputFormat;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.util.List;

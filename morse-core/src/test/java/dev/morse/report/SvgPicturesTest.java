@@ -2,7 +2,6 @@ package dev.morse.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import dev.morse.complex.ComplexChoice;
 import dev.morse.engine.ComparisonReport;
 import dev.morse.engine.MatchingRun;
 import dev.morse.engine.Request;

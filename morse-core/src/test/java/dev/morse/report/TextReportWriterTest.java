@@ -12,7 +12,6 @@ import dev.morse.io.PosetReader;
 import java.util.Map;
 import dev.morse.homology.Homology;
 import dev.morse.homology.HomologyGroup;
-import dev.morse.io.InputFormat;
 import java.math.BigInteger;
 import java.util.List;
 import java.util.Optional;

@@ -12,7 +12,8 @@ import dev.morse.implicit.ElementOrder;
 import dev.morse.engine.Request;
 import dev.morse.matching.MatchingHeuristics;
 import java.util.Iterator;
-import java.util.List;
+import java.util.function.Function;
+import java.util.function.Supplier;
 import java.util.stream.Stream;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
@@ -22,76 +23,84 @@ final class OptionConverters {
     private OptionConverters() {
     }
 
-    /** {@code auto}, {@code order}, {@code cellular} or {@code implicit}. */
-    static final class ComplexConverter implements ITypeConverter<ComplexChoice> {
+    /** A converter by a morse-core parse method, whose IllegalArgumentException is the message users see. */
+    abstract static class Parsed<T> implements ITypeConverter<T> {
+        private final Function<String, T> parse;
+
+        Parsed(Function<String, T> parse) {
+            this.parse = parse;
+        }
+
         @Override
-        public ComplexChoice convert(String value) {
+        public final T convert(String value) {
             try {
-                return ComplexChoice.parse(value);
+                return parse.apply(value);
             } catch (IllegalArgumentException e) {
                 throw new TypeConversionException(e.getMessage());
             }
+        }
+    }
+
+    /** The names of an option's values, for help and shell completion. */
+    abstract static class Names implements Iterable<String> {
+        private final Supplier<Stream<String>> names;
+
+        Names(Supplier<Stream<String>> names) {
+            this.names = names;
+        }
+
+        @Override
+        public final Iterator<String> iterator() {
+            return names.get().iterator();
+        }
+    }
+
+    /** {@code auto}, {@code order}, {@code cellular} or {@code implicit}. */
+    static final class ComplexConverter extends Parsed<ComplexChoice> {
+        ComplexConverter() {
+            super(ComplexChoice::parse);
         }
     }
 
     /** The names shown for {@code --complex}. */
-    static final class ComplexNames implements Iterable<String> {
-        @Override
-        public Iterator<String> iterator() {
-            return Stream.of(ComplexChoice.values()).map(ComplexChoice::optionName).iterator();
+    static final class ComplexNames extends Names {
+        ComplexNames() {
+            super(() -> Stream.of(ComplexChoice.values()).map(ComplexChoice::optionName));
         }
     }
 
     /** An element order of the implicit order complex. */
-    static final class ElementOrderConverter implements ITypeConverter<ElementOrder> {
-        @Override
-        public ElementOrder convert(String value) {
-            try {
-                return ElementOrder.parse(value);
-            } catch (IllegalArgumentException e) {
-                throw new TypeConversionException(e.getMessage());
-            }
+    static final class ElementOrderConverter extends Parsed<ElementOrder> {
+        ElementOrderConverter() {
+            super(ElementOrder::parse);
         }
     }
 
     /** The names shown for {@code --element-order}. */
-    static final class ElementOrderNames implements Iterable<String> {
-        @Override
-        public Iterator<String> iterator() {
-            return Stream.of(ElementOrder.values()).map(ElementOrder::optionName).iterator();
+    static final class ElementOrderNames extends Names {
+        ElementOrderNames() {
+            super(() -> Stream.of(ElementOrder.values()).map(ElementOrder::optionName));
         }
     }
 
     /** {@code Z}, {@code Q} or a prime. */
-    static final class CoefficientsConverter implements ITypeConverter<Coefficients> {
-        @Override
-        public Coefficients convert(String value) {
-            try {
-                return Coefficients.parse(value);
-            } catch (IllegalArgumentException e) {
-                throw new TypeConversionException(e.getMessage());
-            }
+    static final class CoefficientsConverter extends Parsed<Coefficients> {
+        CoefficientsConverter() {
+            super(Coefficients::parse);
         }
     }
 
     /** A matching name known to morse-core. */
-    static final class MatchingConverter implements ITypeConverter<String> {
-        @Override
-        public String convert(String value) {
-            try {
-                return Request.requireKnownMatching(value);
-            } catch (IllegalArgumentException e) {
-                throw new TypeConversionException(e.getMessage());
-            }
+    static final class MatchingConverter extends Parsed<String> {
+        MatchingConverter() {
+            super(Request::requireKnownMatching);
         }
     }
 
     /** The names shown for {@code --matching}. */
-    static final class MatchingNames implements Iterable<String> {
-        @Override
-        public Iterator<String> iterator() {
-            List<String> names = MatchingHeuristics.names();
-            return names.iterator();
+    static final class MatchingNames extends Names {
+        MatchingNames() {
+            super(() -> MatchingHeuristics.names().stream());
         }
     }
 
@@ -109,14 +118,9 @@ final class OptionConverters {
     }
 
     /** Sizes like {@code 64,64,32}. */
-    static final class VolumeSizeConverter implements ITypeConverter<VolumeSize> {
-        @Override
-        public VolumeSize convert(String value) {
-            try {
-                return VolumeSize.parse(value);
-            } catch (IllegalArgumentException e) {
-                throw new TypeConversionException(e.getMessage());
-            }
+    static final class VolumeSizeConverter extends Parsed<VolumeSize> {
+        VolumeSizeConverter() {
+            super(VolumeSize::parse);
         }
     }
 

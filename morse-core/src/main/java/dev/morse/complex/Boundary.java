@@ -1,5 +1,6 @@
 package dev.morse.complex;
 
+import dev.morse.poset.CompressedRows;
 import java.util.Arrays;
 
 /**
@@ -9,9 +10,7 @@ import java.util.Arrays;
  *
  * <p>Memory: 4 bytes per cell plus 8 bytes per entry.
  */
-public final class Boundary {
-    private final int[] offsets;
-    private final int[] targets;
+public final class Boundary extends CompressedRows {
     private final int[] coefficients;
 
     /**
@@ -22,44 +21,22 @@ public final class Boundary {
      * @param coefficients nonzero coefficient of each entry
      */
     public Boundary(int[] offsets, int[] targets, int[] coefficients) {
-        if (offsets.length == 0 || offsets[0] != 0 || offsets[offsets.length - 1] != targets.length
-                || targets.length != coefficients.length) {
-            throw new IllegalArgumentException("inconsistent CSR arrays");
+        super(offsets, targets);
+        if (targets.length != coefficients.length) {
+            throw new IllegalArgumentException("inconsistent CSR arrays: one coefficient per entry is needed");
         }
-        this.offsets = offsets;
-        this.targets = targets;
         this.coefficients = coefficients;
     }
 
     /** Number of cells (rows). */
     public int cellCount() {
-        return offsets.length - 1;
+        return rowCount();
     }
 
-    /** Number of nonzero entries. */
-    public int entryCount() {
-        return targets.length;
-    }
 
-    /** First entry index of cell {@code c}. */
-    public int start(int c) {
-        return offsets[c];
-    }
 
-    /** One past the last entry index of cell {@code c}. */
-    public int end(int c) {
-        return offsets[c + 1];
-    }
 
-    /** Number of entries of cell {@code c}. */
-    public int size(int c) {
-        return offsets[c + 1] - offsets[c];
-    }
 
-    /** Target cell of entry {@code i}. */
-    public int target(int i) {
-        return targets[i];
-    }
 
     /** Coefficient of entry {@code i}. */
     public int coefficient(int i) {

@@ -73,12 +73,12 @@ final class CorpusCatalog {
             e.add(poset("cross-" + d + "-boundary",
                     "nonempty proper faces of the " + d + "-cross-polytope (nonzero sign vectors): the sphere S^"
                             + (d - 1),
-                    POLYTOPE, true, Expected.sphere(d - 1), () -> CrossPolytopeFaces.boundaryFacePoset(m)));
+                    POLYTOPE, true, Expected.sphere(d - 1), () -> CrossPolytopeFaces.of(FacePart.BOUNDARY, m)));
         }
         e.add(poset("cube-3-closed", "nonempty faces of the 3-cube, the cube included: a closed 3-ball",
                 BALL, true, Expected.contractible(3), () -> CubeFaces.closedFacePoset(3)));
         e.add(poset("cross-3-closed", "nonempty faces of the octahedron, the octahedron included: a closed 3-ball",
-                BALL, true, Expected.contractible(3), () -> CrossPolytopeFaces.closedFacePoset(3)));
+                BALL, true, Expected.contractible(3), () -> CrossPolytopeFaces.of(FacePart.CLOSED, 3)));
     }
 
     private static void addProjectiveSpaces(List<CorpusEntry> e) {

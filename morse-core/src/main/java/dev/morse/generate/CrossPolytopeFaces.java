@@ -15,28 +15,20 @@ import dev.morse.poset.PosetBuilder;
 public final class CrossPolytopeFaces {
     /** Largest dimension accepted: 3^12 = 531441 faces. */
     public static final int MAX_DIMENSION = 12;
-    /** Label of the whole cross-polytope in {@link #closedFacePoset} and {@link #faceLattice}. */
+    /** Label of the whole cross-polytope in the closed ball and the face lattice. */
     public static final String WHOLE = "whole";
 
     private CrossPolytopeFaces() {
     }
 
     /**
-     * The nonempty proper faces (nonzero sign vectors): a CW poset whose regular CW complex is the
-     * boundary sphere {@code S^(d-1)}, a simplicial complex.
+     * The faces of the d-dimensional cross-polytope that {@code part} asks for: the nonempty proper
+     * faces (nonzero sign vectors), a CW poset whose regular CW complex is the boundary sphere
+     * {@code S^(d-1)}, a simplicial complex; with the polytope itself ({@value #WHOLE}), a CW poset
+     * of the closed d-ball; or the face lattice, the empty face being the zero word {@code 00...0}.
      */
-    public static Poset boundaryFacePoset(int d) {
-        return build(d, false, false);
-    }
-
-    /** The nonempty faces with the polytope itself ({@value #WHOLE}): a CW poset of the closed d-ball. */
-    public static Poset closedFacePoset(int d) {
-        return build(d, true, false);
-    }
-
-    /** The face lattice: every face, the empty face being the zero word {@code 00...0}. */
-    public static Poset faceLattice(int d) {
-        return build(d, true, true);
+    public static Poset of(FacePart part, int d) {
+        return build(d, part != FacePart.BOUNDARY, part == FacePart.LATTICE);
     }
 
     /** The sign word of face number {@code code}, reading {@code code} in base 3 (0, +, then -). */

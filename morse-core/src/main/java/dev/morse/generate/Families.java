@@ -41,12 +41,8 @@ public final class Families {
 
     /** Faces of the d-dimensional cross-polytope. */
     public static Generated crossPolytope(int d, FacePart part) {
-        Poset p = switch (part) {
-            case BOUNDARY -> CrossPolytopeFaces.boundaryFacePoset(d);
-            case CLOSED -> CrossPolytopeFaces.closedFacePoset(d);
-            case LATTICE -> CrossPolytopeFaces.faceLattice(d);
-        };
-        return new Generated.OfPoset(p, faces(part) + "the " + d + "-dimensional cross-polytope");
+        return new Generated.OfPoset(CrossPolytopeFaces.of(part, d), faces(part) + "the " + d
+                + "-dimensional cross-polytope");
     }
 
     /** The partition lattice {@code Π_n}, or its proper part. */

@@ -1,5 +1,6 @@
 package dev.morse.homology;
 
+import dev.morse.poset.CompressedRows;
 import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
@@ -12,27 +13,22 @@ import java.math.BigInteger;
  *
  * <p>Memory: 4 bytes per column plus 12 bytes per nonzero entry.
  */
-public final class SparseIntegerMatrix {
+public final class SparseIntegerMatrix extends CompressedRows {
     private final int rows;
-    private final int[] columnOffsets;
-    private final int[] rowIndices;
     private final long[] values;
 
     /** Takes ownership of the arrays; entries must be nonzero, rows in range. */
-    public SparseIntegerMatrix(int rows, int[] columnOffsets, int[] rowIndices, long[] values) {
-        if (columnOffsets.length == 0 || columnOffsets[0] != 0
-                || columnOffsets[columnOffsets.length - 1] != rowIndices.length
-                || rowIndices.length != values.length) {
-            throw new IllegalArgumentException("inconsistent CSC arrays");
+    public SparseIntegerMatrix(int rows, int[] offsets, int[] targets, long[] values) {
+        super(offsets, targets);
+        if (targets.length != values.length) {
+            throw new IllegalArgumentException("inconsistent CSC arrays: one value per entry is needed");
         }
-        for (int i = 0; i < rowIndices.length; i++) {
-            if (rowIndices[i] < 0 || rowIndices[i] >= rows || values[i] == 0) {
+        for (int i = 0; i < targets.length; i++) {
+            if (targets[i] < 0 || targets[i] >= rows || values[i] == 0) {
                 throw new IllegalArgumentException("bad entry at " + i);
             }
         }
         this.rows = rows;
-        this.columnOffsets = columnOffsets;
-        this.rowIndices = rowIndices;
         this.values = values;
     }
 
@@ -87,27 +83,19 @@ public final class SparseIntegerMatrix {
 
     /** Number of columns. */
     public int columns() {
-        return columnOffsets.length - 1;
+        return rowCount();
     }
 
     /** Number of nonzero entries. */
     public int nonZeros() {
-        return rowIndices.length;
+        return entryCount();
     }
 
-    /** First entry of column {@code j}. */
-    public int start(int j) {
-        return columnOffsets[j];
-    }
 
-    /** One past the last entry of column {@code j}. */
-    public int end(int j) {
-        return columnOffsets[j + 1];
-    }
 
     /** Row of entry {@code i}. */
     public int row(int i) {
-        return rowIndices[i];
+        return target(i);
     }
 
     /** Value of entry {@code i}. */
@@ -123,7 +111,7 @@ public final class SparseIntegerMatrix {
         }
         for (int j = 0; j < columns(); j++) {
             for (int i = start(j); i < end(j); i++) {
-                dense[rowIndices[i]][j] = dense[rowIndices[i]][j].add(BigInteger.valueOf(values[i]));
+                dense[targets[i]][j] = dense[targets[i]][j].add(BigInteger.valueOf(values[i]));
             }
         }
         return dense;

@@ -8,9 +8,7 @@ import java.util.Arrays;
  *
  * <p>Memory: 4 bytes per vertex plus 4 bytes per edge.
  */
-public final class Adjacency {
-    private final int[] offsets;
-    private final int[] targets;
+public final class Adjacency extends CompressedRows {
 
     /**
      * Wraps arrays without copying; callers hand over ownership.
@@ -19,11 +17,7 @@ public final class Adjacency {
      * @param targets length {@code offsets[n]}
      */
     Adjacency(int[] offsets, int[] targets) {
-        if (offsets.length == 0 || offsets[0] != 0 || offsets[offsets.length - 1] != targets.length) {
-            throw new IllegalArgumentException("offsets do not describe targets");
-        }
-        this.offsets = offsets;
-        this.targets = targets;
+        super(offsets, targets);
     }
 
     /** Builds an adjacency from edge lists; sorts each row. */
@@ -48,33 +42,21 @@ public final class Adjacency {
 
     /** Number of vertices. */
     public int vertexCount() {
-        return offsets.length - 1;
+        return rowCount();
     }
 
     /** Number of edges. */
     public int edgeCount() {
-        return targets.length;
+        return entryCount();
     }
 
-    /** First index of the neighbours of {@code x}. */
-    public int start(int x) {
-        return offsets[x];
-    }
 
-    /** One past the last index of the neighbours of {@code x}. */
-    public int end(int x) {
-        return offsets[x + 1];
-    }
 
     /** Number of neighbours of {@code x}. */
     public int degree(int x) {
-        return offsets[x + 1] - offsets[x];
+        return size(x);
     }
 
-    /** The neighbour stored at index {@code i}. */
-    public int target(int i) {
-        return targets[i];
-    }
 
     /** A copy of the neighbours of {@code x}. */
     public int[] neighbours(int x) {

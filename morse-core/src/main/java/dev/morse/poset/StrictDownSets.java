@@ -14,16 +14,12 @@ import java.util.Arrays;
  * (whose down-sets are small) fit where an n × n bit matrix would not. The number of pairs is
  * checked against a limit while building, before it can exhaust memory.
  */
-public final class StrictDownSets {
+public final class StrictDownSets extends CompressedRows {
     /** The most pairs one Java array holds (common practice). */
     public static final long MAX_PAIRS = Integer.MAX_VALUE - 8;
 
-    private final int[] offsets;
-    private final int[] below;
-
     private StrictDownSets(int[] offsets, int[] below) {
-        this.offsets = offsets;
-        this.below = below;
+        super(offsets, below);
     }
 
     /**
@@ -85,31 +81,23 @@ public final class StrictDownSets {
 
     /** Number of elements. */
     public int size() {
-        return offsets.length - 1;
+        return rowCount();
     }
 
     /** Number of comparable pairs {@code y < x}. */
     public long pairCount() {
-        return below.length;
+        return entryCount();
     }
 
-    /** First index of the elements below {@code x}. */
-    public int start(int x) {
-        return offsets[x];
-    }
 
-    /** One past the last index of the elements below {@code x}. */
-    public int end(int x) {
-        return offsets[x + 1];
-    }
 
     /** The element stored at index {@code i}. */
     public int element(int i) {
-        return below[i];
+        return target(i);
     }
 
     /** Whether {@code y < x}, by binary search. */
     public boolean isBelow(int y, int x) {
-        return Arrays.binarySearch(below, offsets[x], offsets[x + 1], y) >= 0;
+        return Arrays.binarySearch(targets, offsets[x], offsets[x + 1], y) >= 0;
     }
 }

@@ -123,11 +123,7 @@ public final class JsonReportWriter {
             json.writeStartObject();
             json.writeNumberField("round", round.round());
             json.writeNumberField("pairs_removed", round.pairsRemoved());
-            json.writeArrayFieldStart("cells");
-            for (int c : round.cellCounts()) {
-                json.writeNumber(c);
-            }
-            json.writeEndArray();
+            JsonStyle.intArray(json, "cells", java.util.Arrays.stream(round.cellCounts()).boxed().toList());
             json.writeEndObject();
         }
         json.writeEndArray();

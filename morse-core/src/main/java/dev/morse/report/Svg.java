@@ -20,10 +20,7 @@ final class Svg {
 
     /** Opens an element; attributes come as name, value pairs. */
     Svg open(String name, String... attributes) {
-        indent();
-        out.append('<').append(name);
-        attributes(attributes);
-        out.append(">\n");
+        startTag(name, attributes).append(">\n");
         depth++;
         return this;
     }
@@ -38,29 +35,29 @@ final class Svg {
 
     /** An element without content. */
     Svg empty(String name, String... attributes) {
-        indent();
-        out.append('<').append(name);
-        attributes(attributes);
-        out.append("/>\n");
+        startTag(name, attributes).append("/>\n");
         return this;
     }
 
     /** An element holding escaped text. */
     Svg text(String name, String content, String... attributes) {
-        indent();
-        out.append('<').append(name);
-        attributes(attributes);
-        out.append('>').append(escape(content)).append("</").append(name).append(">\n");
+        startTag(name, attributes).append('>').append(escape(content)).append("</").append(name).append(">\n");
         return this;
     }
 
     /** An empty element with a tooltip: a {@code <title>} child. */
     Svg titled(String name, String title, String... attributes) {
+        startTag(name, attributes).append("><title>").append(escape(title)).append("</title></").append(name)
+                .append(">\n");
+        return this;
+    }
+
+    /** Indents and writes the start of an element with its attributes, leaving the tag open. */
+    private StringBuilder startTag(String name, String... attributes) {
         indent();
         out.append('<').append(name);
         attributes(attributes);
-        out.append("><title>").append(escape(title)).append("</title></").append(name).append(">\n");
-        return this;
+        return out;
     }
 
     /** The finished document. */

@@ -251,7 +251,7 @@ class GeneratorsTest {
         // open interval (Rota 1964); checks the chain counts against the Möbius recursion
         List<Poset> lattices = List.of(BooleanLattice.lattice(5), PartitionLattice.lattice(5),
                 SubspaceLattice.lattice(2, 4), DivisorLattice.lattice(360), CubeFaces.faceLattice(3),
-                CrossPolytopeFaces.faceLattice(4));
+                CrossPolytopeFaces.of(FacePart.LATTICE, 4));
         for (Poset lattice : lattices) {
             assertEquals(Mobius.bottomToTop(lattice), reducedEuler(PosetOperations.properPart(lattice)));
         }
@@ -284,12 +284,12 @@ class GeneratorsTest {
     void crossPolytopeFaceNumbers() {
         // the d-cross-polytope has 2^(k+1) C(d,k+1) faces of dimension k < d (common practice)
         for (int d = 1; d <= 6; d++) {
-            long[] sizes = rankSizes(CrossPolytopeFaces.boundaryFacePoset(d));
+            long[] sizes = rankSizes(CrossPolytopeFaces.of(FacePart.BOUNDARY, d));
             assertEquals(d, sizes.length);
             for (int k = 0; k < d; k++) {
                 assertEquals(power(2, k + 1) * binomial(d, k + 1), sizes[k], "d = " + d + ", k = " + k);
             }
-            assertEquals(power(3, d) + 1, CrossPolytopeFaces.faceLattice(d).size());
+            assertEquals(power(3, d) + 1, CrossPolytopeFaces.of(FacePart.LATTICE, d).size());
         }
     }
 
@@ -299,7 +299,7 @@ class GeneratorsTest {
         // a cube face maps to the sign vector with * -> 0, 0 -> -, 1 -> +
         for (int d = 1; d <= 4; d++) {
             Poset cube = PosetOperations.dual(CubeFaces.faceLattice(d));
-            Poset cross = CrossPolytopeFaces.faceLattice(d);
+            Poset cross = CrossPolytopeFaces.of(FacePart.LATTICE, d);
             assertEquals(cube.size(), cross.size());
             assertEquals(cube.coverCount(), cross.coverCount());
             for (int x = 0; x < cube.size(); x++) {
@@ -325,7 +325,7 @@ class GeneratorsTest {
         for (int d = 1; d <= 6; d++) {
             long expected = 1 + (d % 2 == 1 ? 1 : -1);
             assertEquals(expected, alternatingRankSum(CubeFaces.boundaryFacePoset(d)));
-            assertEquals(expected, alternatingRankSum(CrossPolytopeFaces.boundaryFacePoset(d)));
+            assertEquals(expected, alternatingRankSum(CrossPolytopeFaces.of(FacePart.BOUNDARY, d)));
             assertEquals(expected, alternatingRankSum(SimplexFaces.boundaryFacePoset(d)));
             assertEquals(1, alternatingRankSum(CubeFaces.closedFacePoset(d)));
             assertEquals(1, alternatingRankSum(SimplexFaces.closedFacePoset(d)));
@@ -616,7 +616,7 @@ class GeneratorsTest {
     void everyGeneratedLabelCanBeWritten() {
         // DESIGN.md: a label has no white space, ':' or '#'
         List<Poset> posets = new ArrayList<>(List.of(BooleanLattice.lattice(4), CubeFaces.faceLattice(3),
-                CrossPolytopeFaces.faceLattice(3), PartitionLattice.lattice(5), SubspaceLattice.lattice(3, 2),
+                CrossPolytopeFaces.of(FacePart.LATTICE, 3), PartitionLattice.lattice(5), SubspaceLattice.lattice(3, 2),
                 SubspaceLattice.lattice(11, 2), DivisorLattice.lattice(360), ProjectiveSpace.antipodalCubeQuotient(3),
                 NonRegularCells.loop(), NonRegularCells.twoDiscsOnALoop(),
                 PosetOperations.product(BooleanLattice.properPart(3), PartitionLattice.properPart(4))));

@@ -11,6 +11,7 @@ import dev.morse.cw.ComplexSelector;
 import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.generate.CrossPolytopeFaces;
+import dev.morse.generate.FacePart;
 import dev.morse.generate.CubeFaces;
 import dev.morse.poset.PosetOperations;
 import dev.morse.generate.SimplexFaces;
@@ -72,7 +73,7 @@ class MorseReductionPropertyTest {
         return switch (random.nextInt(3)) {
             case 0 -> closed ? SimplexFaces.closedFacePoset(d) : SimplexFaces.boundaryFacePoset(d);
             case 1 -> closed ? CubeFaces.closedFacePoset(d) : CubeFaces.boundaryFacePoset(d);
-            default -> closed ? CrossPolytopeFaces.closedFacePoset(d) : CrossPolytopeFaces.boundaryFacePoset(d);
+            default -> closed ? CrossPolytopeFaces.of(FacePart.CLOSED, d) : CrossPolytopeFaces.of(FacePart.BOUNDARY, d);
         };
     }
 

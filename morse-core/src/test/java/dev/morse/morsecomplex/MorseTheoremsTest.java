@@ -10,6 +10,7 @@ import dev.morse.complex.ChainComplex;
 import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.generate.CrossPolytopeFaces;
+import dev.morse.generate.FacePart;
 import dev.morse.generate.CubeFaces;
 import dev.morse.generate.SimplexFaces;
 import dev.morse.generate.Skeleton;
@@ -39,8 +40,8 @@ class MorseTheoremsTest {
             // boundaries of polytopes are shellable (Bruggesser–Mani 1971); closed polytopes are collapsible balls
             complexes.add(CwPosetCheck.cellularComplex(CubeFaces.boundaryFacePoset(d)));
             complexes.add(CwPosetCheck.cellularComplex(CubeFaces.closedFacePoset(d)));
-            complexes.add(CwPosetCheck.cellularComplex(CrossPolytopeFaces.boundaryFacePoset(d)));
-            complexes.add(CwPosetCheck.cellularComplex(CrossPolytopeFaces.closedFacePoset(d)));
+            complexes.add(CwPosetCheck.cellularComplex(CrossPolytopeFaces.of(FacePart.BOUNDARY, d)));
+            complexes.add(CwPosetCheck.cellularComplex(CrossPolytopeFaces.of(FacePart.CLOSED, d)));
             complexes.add(CwPosetCheck.cellularComplex(SimplexFaces.boundaryFacePoset(d)));
             complexes.add(CwPosetCheck.cellularComplex(SimplexFaces.closedFacePoset(d)));
             // the simplex itself and its boundary, as simplicial complexes: the (d-1)-skeleton of Δ^d is ∂Δ^d
@@ -50,7 +51,7 @@ class MorseTheoremsTest {
         // barycentric subdivisions: order complexes of the same face posets
         for (int d = 1; d <= 4; d++) {
             complexes.add(OrderComplex.of(CubeFaces.boundaryFacePoset(d)));
-            complexes.add(OrderComplex.of(CrossPolytopeFaces.closedFacePoset(d)));
+            complexes.add(OrderComplex.of(CrossPolytopeFaces.of(FacePart.CLOSED, d)));
         }
         return complexes;
     }

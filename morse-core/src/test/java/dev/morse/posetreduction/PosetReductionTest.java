@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import dev.morse.complex.OrderComplex;
 import dev.morse.generate.BooleanLattice;
 import dev.morse.generate.CrossPolytopeFaces;
+import dev.morse.generate.FacePart;
 import dev.morse.generate.DivisorLattice;
 import dev.morse.generate.NoncrossingPartitionLattice;
 import dev.morse.generate.PartitionLattice;
@@ -75,7 +76,7 @@ class PosetReductionTest {
         // (a disc): no element covers or is covered by exactly one, but each new element sits on a
         // disc, an acyclic lower link. Δ is S^2 with two cones on a disc glued on: still S^2,
         // H = Z, 0, Z, 0 (common practice: coning off a contractible subcomplex keeps the homotopy type)
-        Poset octahedron = CrossPolytopeFaces.boundaryFacePoset(3);
+        Poset octahedron = CrossPolytopeFaces.of(FacePart.BOUNDARY, 3);
         PosetBuilder b = new PosetBuilder();
         for (int x = 0; x < octahedron.size(); x++) {
             b.element(octahedron.label(x));

@@ -56,7 +56,7 @@ class OneModelCommandsTest {
     @Test
     void compareOnTheImplicitOrderComplexComparesItsElementOrders() {
         String file = corpus("boolean-3-proper.poset");
-        CliRun run = CliRun.morse("compare", "--complex", "implicit", file);
+        CliRun run = CliRun.morse("compare", "--complex", "implicit", file, "--matching", "implicit:down-sets,implicit:ids");
         assertEquals(0, run.code(), run.err());
         assertEquals("", run.err());
         // the proper part of B_3 is the boundary of a triangle, a circle (standard; Wachs 2007)
@@ -64,7 +64,8 @@ class OneModelCommandsTest {
                 "  homology  H_0 = Z, H_1 = Z (by implicit:down-sets; every matching agrees)"),
                 run.out().lines().limit(4).toList());
 
-        Map<String, Object> json = json("compare", "--complex", "implicit", "--json", file);
+        Map<String, Object> json = json("compare", "--complex", "implicit", "--json", file, "--matching",
+                "implicit:down-sets,implicit:ids");
         assertEquals("order", json.get("complex"));
         // the order complex of the 6 elements and 6 comparable pairs of the proper part of B_3
         assertEquals(List.of(big(6), big(6)), json.get("cells"));
@@ -230,13 +231,30 @@ class OneModelCommandsTest {
     }
 
     @Test
+    void namedImplicitRowsNeedTheImplicitEngineAndNamedHeuristicsTheStoredOne() throws IOException {
+        String file = Inputs.write(dir, "bowtie.poset", WHISKERED_BOWTIE);
+        CliRun stored = CliRun.morse("compare", "--complex", "order", "--matching", "implicit:ids", file);
+        assertEquals(2, stored.code());
+        assertEquals(List.of(file + ": the implicit: rows name the matching of the order complex generated on demand,"
+                + " and the complex here is stored; --complex implicit generates it"), stored.err().lines().toList());
+        CliRun implicit = CliRun.morse("compare", "--complex", "implicit", "--matching", "collapse", file);
+        assertEquals(2, implicit.code());
+        assertTrue(implicit.err().startsWith(file + ": the order complex here is generated on demand (as asked)"),
+                implicit.err());
+        CliRun unknown = CliRun.morse("compare", "--complex", "implicit", "--matching", "implicit:sideways", file);
+        assertEquals(2, unknown.code());
+        assertEquals("", unknown.out());
+    }
+
+    @Test
     void compareOnTheImplicitOrderComplexOfANonCwPoset() throws IOException {
         String file = Inputs.write(dir, "bowtie.poset", WHISKERED_BOWTIE);
         Map<String, Object> json = json("compare", "--complex", "implicit", "--json", file);
         assertEquals("order", json.get("complex"));
         // the circle of WHISKERED_BOWTIE
         assertEquals(List.of(1L, 1L), CliFiles.betti(json));
-        assertEquals(List.of("implicit:down-sets", "implicit:ids"), rowNames(json));
+        // by default only the element order homology would use
+        assertEquals(List.of("implicit:down-sets"), rowNames(json));
         assertEquals(CliFiles.homologyJson("--complex", "implicit", file).get("homology"), json.get("homology"));
     }
 

@@ -17,7 +17,7 @@ import java.util.Set;
  * exactly as for a homology run, then each matching runs on it with every phase timed and the
  * approximate peak heap noted. On a stored complex the rows are the matching heuristics; on an
  * order complex generated on demand, whose matching is the implicit engine's own, they are its
- * element orders. The first row's homology is the reference; every other must give the same
+ * element orders, named {@code implicit:ORDER} (by default only the request's order). The first row's homology is the reference; every other must give the same
  * groups, since any acyclic matching preserves homology (Forman 1998), so a difference is a bug and
  * raises {@link IllegalStateException}, as does a matching the verifier rejects. Stateless.
  */
@@ -44,28 +44,36 @@ public final class HeuristicComparison {
      * @throws IllegalStateException when a matching fails verification or disagrees with the reference
      */
     public static ComparisonReport run(Input input, Request request, Optional<List<String>> matchings) {
-        List<String> names = matchings.map(HeuristicComparison::requireComparable).orElseGet(HeuristicComparison::defaultMatchings);
-        ComplexPlan plan = ComplexPolicy.plan(input, request.withMatching(names.contains(Request.NO_MATCHING) ? Request.NO_MATCHING : names.get(0),
-                request.seed(), request.trials()));
+        List<String> names = matchings.map(HeuristicComparison::requireComparable)
+                .orElseGet(HeuristicComparison::defaultMatchings);
+        List<String> heuristics = names.stream().filter(n -> !n.startsWith(IMPLICIT_ROW)).toList();
+        String first = heuristics.contains(Request.NO_MATCHING) ? Request.NO_MATCHING
+                : heuristics.isEmpty() ? request.matching() : heuristics.get(0);
+        ComplexPlan plan = ComplexPolicy.plan(input, request.withMatching(first, request.seed(), request.trials()));
         List<Computation> runs = new ArrayList<>();
         List<Long> peaks = new ArrayList<>();
         if (plan.isImplicit()) {
-            if (matchings.isPresent()) {
+            if (!heuristics.isEmpty() && matchings.isPresent()) {
                 throw new InputException(input.source(), InputException.NO_LINE, "the order complex here is generated"
                         + " on demand (" + (plan.reason().isEmpty() ? "as asked" : plan.reason()) + "), and that engine"
-                        + " has its own matching, so its element orders are compared instead of named matchings;"
-                        + " --complex order stores the chains for the heuristics");
+                        + " has its own matching: compare its element orders (" + IMPLICIT_ROW + "down-sets,"
+                        + IMPLICIT_ROW + "ids), or store the chains with --complex order to compare heuristics");
             }
-            for (ElementOrder order : ElementOrder.values()) {
+            for (ElementOrder order : implicitOrders(names, matchings.isPresent(), request)) {
                 HeapPeaks.reset();
                 runs.add(plan.engine().run(input, plan, request.withImplicit(order, request.storedChainLimit())));
                 peaks.add(HeapPeaks.peakBytes());
             }
         } else {
+            if (heuristics.size() < names.size()) {
+                throw new InputException(input.source(), InputException.NO_LINE, "the " + IMPLICIT_ROW
+                        + " rows name the matching of the order complex generated on demand, and the complex here is"
+                        + " stored; --complex implicit generates it");
+            }
             for (String name : names) {
                 HeapPeaks.reset();
                 Request one = request.withMatching(name, request.seed(),
-                        MatchingHeuristics.byName(name).orElseThrow().randomized() ? request.trials() : 1).withVerify(true);
+                        MatchingHeuristics.byName(name).orElseThrow().randomized() ? request.trials() : 1);
                 runs.add(plan.engine().run(input, plan, one));
                 peaks.add(HeapPeaks.peakBytes());
             }
@@ -87,6 +95,22 @@ public final class HeuristicComparison {
                 reference.unreducedHomology(), request.reduced(), rows.get(0).matching(), setup, rows, request.seed());
     }
 
+    /**
+     * The element orders to compare on an implicit plan: those named as {@code implicit:ORDER}, or
+     * by default only the request's, the one homology would use (the others can be slow: an order
+     * that is no EL-labelling leaves many critical chains and long gradient paths).
+     */
+    private static List<ElementOrder> implicitOrders(List<String> names, boolean named, Request request) {
+        if (!named) {
+            return List.of(request.elementOrder());
+        }
+        List<ElementOrder> orders = new ArrayList<>();
+        for (String name : names) {
+            orders.add(ElementOrder.parse(name.substring(IMPLICIT_ROW.length())));
+        }
+        return orders;
+    }
+
     private static String rowName(Computation reference, ComplexPlan plan) {
         return plan.isImplicit()
                 ? IMPLICIT_ROW + reference.implicitRun().orElseThrow().order().optionName()
@@ -104,7 +128,8 @@ public final class HeuristicComparison {
     }
 
     /**
-     * Returns the names if they can be compared: at least one, each known, none twice.
+     * Returns the names if they can be compared: at least one, none twice, each a known matching
+     * heuristic or {@code implicit:ORDER} for the implicit engine with an element order.
      *
      * @throws IllegalArgumentException saying which rule a name breaks
      */
@@ -114,7 +139,11 @@ public final class HeuristicComparison {
         }
         Set<String> seen = new HashSet<>();
         for (String name : names) {
-            Request.requireKnownMatching(name);
+            if (name.startsWith(IMPLICIT_ROW)) {
+                ElementOrder.parse(name.substring(IMPLICIT_ROW.length()));
+            } else {
+                Request.requireKnownMatching(name);
+            }
             if (!seen.add(name)) {
                 throw new IllegalArgumentException("matching '" + name + "' is named twice");
             }

@@ -1,12 +1,16 @@
 package dev.morse.cli;
 
+import dev.morse.cycles.Cycle;
+import dev.morse.cycles.RepresentativeCycles;
 import dev.morse.engine.Computation;
+import java.util.List;
 import dev.morse.report.JsonReportWriter;
 import dev.morse.report.TextReportWriter;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Spec;
 
@@ -31,11 +35,16 @@ final class HomologyCommand implements Callable<Integer> {
     @Mixin
     private JsonOption output;
 
+    @Option(names = "--cycles", description = "Also give one representative cycle per generator of each homology"
+            + " group, in the input's labels, each checked to be a cycle before it is printed.")
+    private boolean cycles;
+
     @Override
     public Integer call() throws Exception {
         Computation result = computation.compute(spec);
+        List<Cycle> found = cycles ? RepresentativeCycles.of(result) : List.of();
         PrintWriter out = spec.commandLine().getOut();
-        out.print(output.json() ? JsonReportWriter.toJson(result) : TextReportWriter.toText(result));
+        out.print(output.json() ? JsonReportWriter.toJson(result, found) : TextReportWriter.toText(result, found));
         out.flush();
         return 0;
     }

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import dev.morse.cw.CwPosetVerdict;
+import dev.morse.cycles.Cycle;
 import dev.morse.engine.Computation;
 import dev.morse.engine.ImageFacts;
 import dev.morse.engine.PhaseTiming;
@@ -49,11 +50,21 @@ public final class JsonReportWriter {
 
     /** The report as indented JSON text ending with a newline. */
     public static String toJson(Computation report) {
-        return TextOutput.render(w -> write(report, w));
+        return toJson(report, List.of());
+    }
+
+    /** The report with its representative cycles ({@code "cycles"}, when any are given) as indented JSON. */
+    public static String toJson(Computation report, List<Cycle> cycles) {
+        return TextOutput.render(w -> write(report, cycles, w));
     }
 
     /** Writes the report as indented JSON and a final newline to {@code out}; does not close it. */
     public static void write(Computation report, Writer out) throws IOException {
+        write(report, List.of(), out);
+    }
+
+    /** Writes the report and its representative cycles as indented JSON and a final newline; does not close {@code out}. */
+    public static void write(Computation report, List<Cycle> cycles, Writer out) throws IOException {
         try (JsonGenerator json = FACTORY.createGenerator(out)) {
             json.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
             json.setPrettyPrinter(prettyPrinter());
@@ -81,6 +92,9 @@ public final class JsonReportWriter {
             }
             if (report.image().isPresent()) {
                 writeImage(json, report.image().get());
+            }
+            if (!cycles.isEmpty()) {
+                CycleJson.write(json, cycles);
             }
             writeTimings(json, report.timings());
             json.writeEndObject();

@@ -1,5 +1,7 @@
 package dev.morse.report;
 
+import dev.morse.complex.ComplexKind;
+import dev.morse.cycles.Cycle;
 import dev.morse.engine.Computation;
 import dev.morse.engine.ImageFacts;
 import dev.morse.engine.PhaseTiming;
@@ -24,12 +26,67 @@ import java.util.StringJoiner;
  */
 public final class TextReportWriter {
     private static final String ROW = "  %-10s%s\n";
+    private static final int CYCLE_TERMS_SHOWN = 8;
 
     private TextReportWriter() {
     }
 
     /** The report as lines of text, each ending with a newline. */
     public static String toText(Computation report) {
+        return toText(report, List.of());
+    }
+
+    /** The report followed by its representative cycles, each on one line with long sums elided. */
+    public static String toText(Computation report, List<Cycle> cycles) {
+        String text = table(report);
+        if (cycles.isEmpty()) {
+            return text;
+        }
+        StringBuilder more = new StringBuilder(text);
+        row(more, "cycles", cycles.size() + (cycles.size() == 1 ? " generator" : " generators")
+                + ", each a cycle of the " + report.complexKind().reportName() + " complex, checked");
+        String prefix = report.reduced() ? "~H_" : "H_";
+        for (Cycle c : cycles) {
+            more.append(String.format(Locale.ROOT, "    %s%d %s: %s\n", prefix, c.dimension(),
+                    c.order().signum() == 0 ? "free" : "order " + c.order(), cycleSum(report.complexKind(), c)));
+        }
+        return more.toString();
+    }
+
+    /** The first terms of a cycle as a signed sum, and how many more there are. */
+    private static String cycleSum(ComplexKind kind, Cycle c) {
+        StringBuilder sum = new StringBuilder();
+        int shown = Math.min(CYCLE_TERMS_SHOWN, c.terms().size());
+        for (int i = 0; i < shown; i++) {
+            Cycle.Term t = c.terms().get(i);
+            BigInteger a = t.coefficient();
+            sum.append(i == 0 ? (a.signum() < 0 ? "-" : "") : (a.signum() < 0 ? " - " : " + "));
+            if (!a.abs().equals(BigInteger.ONE)) {
+                sum.append(a.abs()).append(' ');
+            }
+            sum.append(cellText(kind, t.label()));
+        }
+        if (c.terms().size() > shown) {
+            sum.append(" + ... (").append(c.terms().size()).append(" terms in all)");
+        }
+        return sum.toString();
+    }
+
+    /** A cell as the complex names its cells: {@code {a b c}}, {@code a<b<c}, a label, or {@code [2,3]x[5,5]}. */
+    private static String cellText(ComplexKind kind, List<Object> label) {
+        StringJoiner parts = switch (kind) {
+            case SIMPLICIAL -> new StringJoiner(" ", "{", "}");
+            case ORDER -> new StringJoiner("<");
+            case CUBICAL -> new StringJoiner("x");
+            case CELLULAR -> new StringJoiner("");
+        };
+        for (Object part : label) {
+            parts.add(part instanceof List<?> pair ? "[" + pair.get(0) + "," + pair.get(1) + "]" : part.toString());
+        }
+        return parts.toString();
+    }
+
+    private static String table(Computation report) {
         StringBuilder text = new StringBuilder();
         text.append(String.format(Locale.ROOT, "%s (%s file)\n", report.source(),
                 report.format().name().toLowerCase(Locale.ROOT)));

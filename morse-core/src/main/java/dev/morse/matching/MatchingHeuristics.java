@@ -43,7 +43,7 @@ public final class MatchingHeuristics {
 
     private static List<MatchingHeuristic> builtIn() {
         return List.of(new CoreductionHeuristic(), new CollapseHeuristic(), new LexicographicHeuristic(),
-                new RandomHeuristic(), new NoMatchingHeuristic());
+                new RandomHeuristic(), new LastFreeFaceHeuristic(), new FreeingCollapseHeuristic(), new OptimalHeuristic(), new NoMatchingHeuristic());
     }
 
     /** The names on offer, in order. */

@@ -1,0 +1,464 @@
+package dev.morse.matching;
+
+import dev.morse.complex.Boundary;
+import dev.morse.complex.ChainComplex;
+import dev.morse.homology.Coefficients;
+import dev.morse.homology.Homology;
+import dev.morse.homology.HomologyCalculator;
+import dev.morse.homology.HomologyGroup;
+import it.unimi.dsi.fastutil.ints.IntArrayList;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+import org.ojalgo.optimisation.Expression;
+import org.ojalgo.optimisation.ExpressionsBasedModel;
+import org.ojalgo.optimisation.Optimisation;
+import org.ojalgo.optimisation.Variable;
+
+/**
+ * Optimal Morse matchings by integer programming with lazily added cycle constraints (Joswig and
+ * Pfetsch, "Computing optimal Morse matchings", SIAM J. Discrete Math. 20, 2006). One binary
+ * variable per pair of cells that may be matched (a face and a coface with incidence ±1, as
+ * {@link MatchingVerifier} requires), each cell in at most one chosen pair, the number of pairs
+ * maximised. Acyclicity is imposed lazily: each solution is searched for closed gradient paths
+ * (directed cycles of the Hasse diagram with the chosen pairs reversed, which alternate between two
+ * adjacent dimensions), and for each shortest one found, with k chosen pairs on it, the constraint
+ * that at most k − 1 of those pairs are chosen is added before solving again. The first solution
+ * without a closed path is optimal. The integer programs are solved by ojalgo's branch and bound.
+ *
+ * <p>Two further families of valid constraints shorten the search: the Morse inequalities
+ * m_k ≥ β_k + t_k + t_(k−1) of each dimension (Forman, "Morse theory for cell complexes", 1998; t_k
+ * the number of torsion factors of H_k, computed here by the Smith normal form) bound the matched
+ * cells of each dimension. The best matching of the one-pass heuristics is the starting incumbent; when
+ * it already meets the lower bound it is returned as proven without any integer program. A solution
+ * with closed paths is also repaired (one pair of each closed path unmatched) into a valid matching
+ * that may improve the incumbent, so that a run cut short by the time limit still returns its best.
+ *
+ * <p>Size limit, measured (benchmarks/RESULTS.md): every complex of the hard library with at most
+ * {@value #PROVEN_CELL_LIMIT} cells (Bing's house is the largest) is solved with proof in about a
+ * second. The sum complex X_{0,1,3} on Z/17 (273 cells) is not proven within 60 seconds, and larger
+ * ones end at the time limit of {@link MatchingOptions#timeLimit()} with the bound found so far. What
+ * decides is less the size than how far the heuristics stay above the Morse lower bound: larger
+ * complexes whose best heuristic meets it (the matching complex of K_7, the 4x5 chessboard complex)
+ * are proven at once.
+ * Above {@value #MODEL_CELL_LIMIT} cells no integer program is built and no homology computed: the
+ * result is the best heuristic matching, with only the parity of the cell count as its bound. Memory: a few hundred bytes per pair of cells in
+ * ojalgo's model.
+ */
+public final class OptimalMatchingSolver {
+    /**
+     * Every complex of {@code dev.morse.generate.HardLibrary} with at most this many cells is solved with
+     * proof within the default time limit (measured; the next larger one, 273 cells, is not).
+     */
+    public static final int PROVEN_CELL_LIMIT = 259;
+
+    /** No integer program is built for complexes with more cells than this. */
+    public static final int MODEL_CELL_LIMIT = 5_000;
+
+    private final ChainComplex complex;
+    private final int n;
+    private final int[] edgeLower;
+    private final int[] edgeUpper;
+    private final int[] cellEdgeOffsets;
+    private final int[] cellEdges;
+    private final int[] dimensionBound;
+    private final long criticalBound;
+    private final List<int[]> cuts = new ArrayList<>();
+    private final IntArrayList cutBounds = new IntArrayList();
+    private final Set<String> cutKeys = new HashSet<>();
+
+    private OptimalMatchingSolver(ChainComplex complex, Homology homology) {
+        this.complex = complex;
+        this.n = complex.cellCount();
+        Boundary boundary = complex.boundary();
+        IntArrayList lower = new IntArrayList();
+        IntArrayList upper = new IntArrayList();
+        for (int s = 0; s < n; s++) {
+            for (int i = boundary.start(s); i < boundary.end(s); i++) {
+                int coefficient = boundary.coefficient(i);
+                if (coefficient == 1 || coefficient == -1) {
+                    lower.add(boundary.target(i));
+                    upper.add(s);
+                }
+            }
+        }
+        edgeLower = lower.toIntArray();
+        edgeUpper = upper.toIntArray();
+        cellEdgeOffsets = new int[n + 1];
+        for (int e = 0; e < edgeLower.length; e++) {
+            cellEdgeOffsets[edgeLower[e] + 1]++;
+            cellEdgeOffsets[edgeUpper[e] + 1]++;
+        }
+        for (int c = 0; c < n; c++) {
+            cellEdgeOffsets[c + 1] += cellEdgeOffsets[c];
+        }
+        cellEdges = new int[cellEdgeOffsets[n]];
+        int[] fill = Arrays.copyOf(cellEdgeOffsets, n);
+        for (int e = 0; e < edgeLower.length; e++) {
+            cellEdges[fill[edgeLower[e]]++] = e;
+            cellEdges[fill[edgeUpper[e]]++] = e;
+        }
+        List<HomologyGroup> groups = homology == null ? List.of() : homology.groups();
+        dimensionBound = new int[complex.dimension() + 1];
+        long total = 0;
+        for (int k = 0; k <= complex.dimension() && k < groups.size(); k++) {
+            dimensionBound[k] = groups.get(k).betti() + groups.get(k).torsion().size()
+                    + (k > 0 ? groups.get(k - 1).torsion().size() : 0);
+            total += dimensionBound[k];
+        }
+        // a matching leaves cellCount − 2·pairs critical cells: the parity of the cell count
+        criticalBound = total + Math.floorMod(n - total, 2);
+    }
+
+    /**
+     * Searches for a Morse matching with the fewest critical cells within
+     * {@link MatchingOptions#timeLimit()}; the seed goes to the randomised starting heuristic.
+     */
+    public static OptimalMatching solve(ChainComplex complex, MatchingOptions options) {
+        long start = System.nanoTime();
+        long deadline = start + options.timeLimit().toNanos();
+        // beyond the model limit no program is built, and the Smith normal form would only cost time
+        Homology homology = complex.cellCount() <= MODEL_CELL_LIMIT
+                ? HomologyCalculator.compute(complex, Coefficients.INTEGERS) : null;
+        OptimalMatchingSolver solver = new OptimalMatchingSolver(complex, homology);
+        return solver.run(options, start, deadline);
+    }
+
+    /** The heuristics whose best matching starts the search. */
+    static List<MatchingHeuristic> startingHeuristics(int cellCount) {
+        List<MatchingHeuristic> list = new ArrayList<>(List.of(new CoreductionHeuristic(), new CollapseHeuristic(),
+                new RandomHeuristic(), new LastFreeFaceHeuristic(), new FreeingCollapseHeuristic()));
+        if (cellCount <= MODEL_CELL_LIMIT) {
+            // quadratic in the worst case, so only where an integer program would be built anyway
+            list.add(new LexicographicHeuristic());
+        }
+        return list;
+    }
+
+    private OptimalMatching run(MatchingOptions options, long start, long deadline) {
+        Matching best = null;
+        for (MatchingHeuristic h : startingHeuristics(n)) {
+            Matching m = h.match(complex, options);
+            if (MatchingVerifier.verify(complex, m).valid() && (best == null || m.pairCount() > best.pairCount())) {
+                best = m;
+            }
+        }
+        long upperPairs = (n - criticalBound) / 2;
+        int solves = 0;
+        if (best.pairCount() < upperPairs && n <= MODEL_CELL_LIMIT) {
+            addCoreCuts(null);
+            while (System.nanoTime() < deadline) {
+                long remainingMillis = Math.max(1, (deadline - System.nanoTime()) / 1_000_000);
+                Optimisation.Result result = solveModel(best, remainingMillis);
+                solves++;
+                Optimisation.State state = result.getState();
+                if (!state.isFeasible()) {
+                    break;
+                }
+                int[] mates = chosenMates(result);
+                if (state.isOptimal()) {
+                    upperPairs = Math.min(upperPairs, Math.round(result.getValue()));
+                }
+                List<int[]> cycles = shortestCycles(mates);
+                for (int[] cycle : cycles) {
+                    addCycleCut(cycle, mates);
+                }
+                addCoreCuts(mates);
+                Matching repaired = Matching.adopt(repair(mates));
+                if (repaired.pairCount() > best.pairCount()) {
+                    best = repaired;
+                }
+                if (best.pairCount() >= upperPairs || !state.isOptimal() || cycles.isEmpty()) {
+                    break;
+                }
+            }
+        }
+        boolean proven = best.pairCount() >= upperPairs;
+        MatchingVerdict verdict = MatchingVerifier.verify(complex, best);
+        if (!verdict.valid()) {
+            throw new IllegalStateException("the optimal matching search produced an invalid matching: " + verdict.defect());
+        }
+        long bound = n - 2 * upperPairs;
+        return new OptimalMatching(best, best.criticalCounts(complex), proven, bound,
+                Duration.ofNanos(System.nanoTime() - start), solves, cuts.size());
+    }
+
+    private Optimisation.Result solveModel(Matching incumbent, long timeMillis) {
+        ExpressionsBasedModel model = new ExpressionsBasedModel();
+        int edges = edgeLower.length;
+        Variable[] x = new Variable[edges];
+        for (int e = 0; e < edges; e++) {
+            x[e] = model.addVariable("x" + e).binary().weight(1);
+        }
+        for (int c = 0; c < n; c++) {
+            if (cellEdgeOffsets[c + 1] - cellEdgeOffsets[c] > 1) {
+                Expression once = model.addExpression("cell" + c).upper(1);
+                for (int i = cellEdgeOffsets[c]; i < cellEdgeOffsets[c + 1]; i++) {
+                    once.set(x[cellEdges[i]], 1);
+                }
+            }
+        }
+        // Morse inequalities: at most f_k − (β_k + t_k + t_(k−1)) cells of dimension k are matched
+        for (int k = 0; k <= complex.dimension(); k++) {
+            Expression matched = model.addExpression("dimension" + k).upper(complex.cellCount(k) - dimensionBound[k]);
+            for (int e = 0; e < edges; e++) {
+                if (complex.dimensionOf(edgeLower[e]) == k || complex.dimensionOf(edgeUpper[e]) == k) {
+                    matched.set(x[e], 1);
+                }
+            }
+        }
+        Expression total = model.addExpression("pairs").upper((n - criticalBound) / 2);
+        for (int e = 0; e < edges; e++) {
+            total.set(x[e], 1);
+        }
+        for (int j = 0; j < cuts.size(); j++) {
+            int[] cut = cuts.get(j);
+            Expression cycle = model.addExpression("cut" + j).upper(cutBounds.getInt(j));
+            for (int e : cut) {
+                cycle.set(x[e], 1);
+            }
+        }
+        model.options.time_abort = timeMillis;
+        model.options.time_suffice = timeMillis;
+        return model.maximise();
+    }
+
+    private int[] chosenMates(Optimisation.Result result) {
+        int[] mates = new int[n];
+        Arrays.fill(mates, Matching.CRITICAL);
+        for (int e = 0; e < edgeLower.length; e++) {
+            if (result.doubleValue(e) > 0.5) {
+                if (mates[edgeLower[e]] != Matching.CRITICAL || mates[edgeUpper[e]] != Matching.CRITICAL) {
+                    throw new IllegalStateException("the integer program chose two pairs at one cell");
+                }
+                mates[edgeLower[e]] = edgeUpper[e];
+                mates[edgeUpper[e]] = edgeLower[e];
+            }
+        }
+        return mates;
+    }
+
+    /**
+     * The cut of a closed path given by its upper cells S, with T the lower cells of their pairs: at
+     * most |S| − 1 pairs between T and S. This lifts the cut of Joswig and Pfetsch (only the pairs on
+     * the path) to every pair between T and S. Still valid: if each cell of S had its partner in T, the
+     * partner of every σ in S would also be a face of the cell before σ on the path, so following
+     * partners backwards never stops and closes a gradient path.
+     */
+    private void addCycleCut(int[] uppers, int[] mates) {
+        boolean[] inS = new boolean[n];
+        boolean[] inT = new boolean[n];
+        for (int s : uppers) {
+            inS[s] = true;
+            inT[mates[s]] = true;
+        }
+        IntArrayList edges = new IntArrayList();
+        for (int s : uppers) {
+            for (int i = cellEdgeOffsets[s]; i < cellEdgeOffsets[s + 1]; i++) {
+                int e = cellEdges[i];
+                if (edgeUpper[e] == s && inT[edgeLower[e]]) {
+                    edges.add(e);
+                }
+            }
+        }
+        addCut(edges.toIntArray(), uppers.length - 1);
+    }
+
+    private void addCut(int[] edges, int bound) {
+        if (edges.length <= bound) {
+            return;
+        }
+        int[] sorted = edges.clone();
+        Arrays.sort(sorted);
+        if (cutKeys.add(bound + ":" + Arrays.toString(sorted))) {
+            cuts.add(sorted);
+            cutBounds.add(bound);
+        }
+    }
+
+    /**
+     * Cuts that say a set S of cells of one dimension cannot all be matched downwards (upwards) when no
+     * cell of S has a free face (free coface) relative to S. Why: the pairs of S, ordered by the
+     * gradient flow, would have a first one; its lower cell lies in no other cell of S, so it is a
+     * free face relative to S (dually, a last one). Without {@code mates}, S starts as all cells of a
+     * dimension; with them, as the cells a solution matched that way, which yields a violated cut
+     * whenever the relative core is not empty. Each connected part of the core gives its own cut.
+     */
+    private void addCoreCuts(int[] mates) {
+        for (int d = 0; d <= complex.dimension(); d++) {
+            for (boolean down : new boolean[] {true, false}) {
+                boolean[] in = new boolean[n];
+                int first = complex.firstCell(d);
+                int end = first + complex.cellCount(d);
+                for (int c = first; c < end; c++) {
+                    in[c] = mates == null || (mates[c] != Matching.CRITICAL
+                            && complex.dimensionOf(mates[c]) == (down ? d - 1 : d + 1));
+                }
+                core(first, end, in, down ? complex.boundary() : complex.coboundary(), down);
+            }
+        }
+    }
+
+    private void core(int first, int end, boolean[] in, Boundary toNeighbours, boolean down) {
+        Boundary fromNeighbours = down ? complex.coboundary() : complex.boundary();
+        int[] members = new int[n];
+        for (int c = first; c < end; c++) {
+            if (in[c]) {
+                for (int i = toNeighbours.start(c); i < toNeighbours.end(c); i++) {
+                    members[toNeighbours.target(i)]++;
+                }
+            }
+        }
+        boolean changed = true;
+        while (changed) {
+            changed = false;
+            for (int c = first; c < end; c++) {
+                if (in[c] && hasLooseNeighbour(c, toNeighbours, members)) {
+                    in[c] = false;
+                    for (int i = toNeighbours.start(c); i < toNeighbours.end(c); i++) {
+                        members[toNeighbours.target(i)]--;
+                    }
+                    changed = true;
+                }
+            }
+        }
+        // connected parts of the core: cells sharing a neighbour
+        int[] part = new int[n];
+        Arrays.fill(part, -1);
+        int[] stack = new int[n];
+        for (int c = first; c < end; c++) {
+            if (!in[c] || part[c] >= 0) {
+                continue;
+            }
+            IntArrayList cells = new IntArrayList();
+            int top = 0;
+            stack[top++] = c;
+            part[c] = c;
+            while (top > 0) {
+                int v = stack[--top];
+                cells.add(v);
+                for (int i = toNeighbours.start(v); i < toNeighbours.end(v); i++) {
+                    int w = toNeighbours.target(i);
+                    for (int j = fromNeighbours.start(w); j < fromNeighbours.end(w); j++) {
+                        int u = fromNeighbours.target(j);
+                        if (in[u] && part[u] < 0) {
+                            part[u] = c;
+                            stack[top++] = u;
+                        }
+                    }
+                }
+            }
+            IntArrayList edges = new IntArrayList();
+            for (int v : cells) {
+                for (int i = cellEdgeOffsets[v]; i < cellEdgeOffsets[v + 1]; i++) {
+                    int e = cellEdges[i];
+                    if ((down ? edgeUpper[e] : edgeLower[e]) == v) {
+                        edges.add(e);
+                    }
+                }
+            }
+            addCut(edges.toIntArray(), cells.size() - 1);
+        }
+    }
+
+    /** Whether a neighbour of {@code c} joined by a unit incidence has {@code c} as its only member. */
+    private static boolean hasLooseNeighbour(int c, Boundary toNeighbours, int[] members) {
+        for (int i = toNeighbours.start(c); i < toNeighbours.end(c); i++) {
+            int coefficient = toNeighbours.coefficient(i);
+            if ((coefficient == 1 || coefficient == -1) && members[toNeighbours.target(i)] == 1) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * For every upper cell of a pair, the shortest closed gradient path through it, if any, as the
+     * list of upper cells it passes. A path goes from an upper cell down to a face other than its
+     * partner (any nonzero incidence), and on from that face up to its own partner.
+     */
+    private List<int[]> shortestCycles(int[] mates) {
+        List<int[]> cycles = new ArrayList<>();
+        Set<String> seen = new HashSet<>();
+        int[] parent = new int[n];
+        int[] stamp = new int[n];
+        Arrays.fill(stamp, -1);
+        int[] queue = new int[n];
+        for (int root = 0; root < n; root++) {
+            if (!isUpper(root, mates)) {
+                continue;
+            }
+            int[] cycle = shortestCycleThrough(root, mates, parent, stamp, queue);
+            if (cycle != null) {
+                int[] key = cycle.clone();
+                Arrays.sort(key);
+                if (seen.add(Arrays.toString(key))) {
+                    cycles.add(cycle);
+                }
+            }
+        }
+        return cycles;
+    }
+
+    private boolean isUpper(int c, int[] mates) {
+        return mates[c] != Matching.CRITICAL && complex.dimensionOf(mates[c]) == complex.dimensionOf(c) - 1;
+    }
+
+    private int[] shortestCycleThrough(int root, int[] mates, int[] parent, int[] stamp, int[] queue) {
+        Boundary boundary = complex.boundary();
+        int tail = 0;
+        queue[tail++] = root;
+        stamp[root] = root;
+        for (int head = 0; head < tail; head++) {
+            int s = queue[head];
+            for (int i = boundary.start(s); i < boundary.end(s); i++) {
+                int t = boundary.target(i);
+                if (t == mates[s]) {
+                    continue;
+                }
+                int next = mates[t];
+                if (next == Matching.CRITICAL || !isUpper(next, mates)) {
+                    continue;
+                }
+                if (next == root) {
+                    IntArrayList path = new IntArrayList();
+                    for (int v = s; v != root; v = parent[v]) {
+                        path.add(v);
+                    }
+                    path.add(root);
+                    return path.toIntArray();
+                }
+                if (stamp[next] != root) {
+                    stamp[next] = root;
+                    parent[next] = s;
+                    queue[tail++] = next;
+                }
+            }
+        }
+        return null;
+    }
+
+    /** Unmatches one pair of each closed path until none is left: a valid Morse matching. */
+    private int[] repair(int[] chosen) {
+        int[] mates = chosen.clone();
+        int[] parent = new int[n];
+        int[] stamp = new int[n];
+        int[] queue = new int[n];
+        boolean changed = true;
+        while (changed) {
+            changed = false;
+            Arrays.fill(stamp, -1);
+            for (int root = 0; root < n; root++) {
+                if (isUpper(root, mates) && shortestCycleThrough(root, mates, parent, stamp, queue) != null) {
+                    mates[mates[root]] = Matching.CRITICAL;
+                    mates[root] = Matching.CRITICAL;
+                    changed = true;
+                }
+            }
+        }
+        return mates;
+    }
+}

@@ -118,13 +118,21 @@ public final class OptimalMatchingSolver {
      * {@link MatchingOptions#timeLimit()}; the seed goes to the randomised starting heuristic.
      */
     public static OptimalMatching solve(ChainComplex complex, MatchingOptions options) {
+        return solve(complex, options, true);
+    }
+
+    /**
+     * As {@link #solve(ChainComplex, MatchingOptions)}; without {@code startFromHeuristics} the search
+     * starts from the empty matching, so that the integer programs alone find the optimum (for tests).
+     */
+    static OptimalMatching solve(ChainComplex complex, MatchingOptions options, boolean startFromHeuristics) {
         long start = System.nanoTime();
         long deadline = start + options.timeLimit().toNanos();
         // beyond the model limit no program is built, and the Smith normal form would only cost time
         Homology homology = complex.cellCount() <= MODEL_CELL_LIMIT
                 ? HomologyCalculator.compute(complex, Coefficients.INTEGERS) : null;
         OptimalMatchingSolver solver = new OptimalMatchingSolver(complex, homology);
-        return solver.run(options, start, deadline);
+        return solver.run(options, start, deadline, startFromHeuristics);
     }
 
     /** The heuristics whose best matching starts the search. */
@@ -138,11 +146,11 @@ public final class OptimalMatchingSolver {
         return list;
     }
 
-    private OptimalMatching run(MatchingOptions options, long start, long deadline) {
-        Matching best = null;
-        for (MatchingHeuristic h : startingHeuristics(n)) {
+    private OptimalMatching run(MatchingOptions options, long start, long deadline, boolean startFromHeuristics) {
+        Matching best = Matching.empty(n);
+        for (MatchingHeuristic h : startFromHeuristics ? startingHeuristics(n) : List.<MatchingHeuristic>of()) {
             Matching m = h.match(complex, options);
-            if (MatchingVerifier.verify(complex, m).valid() && (best == null || m.pairCount() > best.pairCount())) {
+            if (MatchingVerifier.verify(complex, m).valid() && m.pairCount() > best.pairCount()) {
                 best = m;
             }
         }

@@ -58,6 +58,9 @@ public final class OptimalMatchingSolver {
     /** No integer program is built for complexes with more cells than this. */
     public static final int MODEL_CELL_LIMIT = 5_000;
 
+    /** Smaller cores tried per core part of a solution. */
+    private static final int SUB_CORES = 200;
+
     private final ChainComplex complex;
     private final int n;
     private final int[] edgeLower;
@@ -66,6 +69,10 @@ public final class OptimalMatchingSolver {
     private final int[] cellEdges;
     private final int[] dimensionBound;
     private final long criticalBound;
+    /** Whether every 1-cell is a graph edge, so that vertices are matched by a spanning forest. */
+    private final boolean graphBottom;
+    /** Pairs of a vertex and an edge in every optimal matching when {@link #graphBottom}: f_0 − β_0. */
+    private final int forestPairs;
     private final List<int[]> cuts = new ArrayList<>();
     private final IntArrayList cutBounds = new IntArrayList();
     private final Set<String> cutKeys = new HashSet<>();
@@ -74,9 +81,11 @@ public final class OptimalMatchingSolver {
         this.complex = complex;
         this.n = complex.cellCount();
         Boundary boundary = complex.boundary();
+        graphBottom = homology != null && complex.dimension() >= 1 && edgesAreGraphEdges(complex);
         IntArrayList lower = new IntArrayList();
         IntArrayList upper = new IntArrayList();
-        for (int s = 0; s < n; s++) {
+        // with graph edges the vertex–edge pairs are left to the spanning forest: no variables for them
+        for (int s = graphBottom ? complex.firstCell(2) : 0; s < n; s++) {
             for (int i = boundary.start(s); i < boundary.end(s); i++) {
                 int coefficient = boundary.coefficient(i);
                 if (coefficient == 1 || coefficient == -1) {
@@ -111,6 +120,76 @@ public final class OptimalMatchingSolver {
         }
         // a matching leaves cellCount − 2·pairs critical cells: the parity of the cell count
         criticalBound = total + Math.floorMod(n - total, 2);
+        forestPairs = graphBottom ? complex.cellCount(0) - groups.get(0).betti() : 0;
+    }
+
+    /** Whether the boundary of every 1-cell is empty or v − w for two distinct vertices. */
+    private static boolean edgesAreGraphEdges(ChainComplex complex) {
+        Boundary boundary = complex.boundary();
+        for (int e = complex.firstCell(1); e < complex.firstCell(2); e++) {
+            int size = boundary.size(e);
+            if (size == 0) {
+                continue;
+            }
+            if (size != 2 || boundary.coefficient(boundary.start(e)) + boundary.coefficient(boundary.start(e) + 1) != 0
+                    || Math.abs(boundary.coefficient(boundary.start(e))) != 1) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * Replaces the vertex–edge pairs of {@code mates} by a spanning forest of the graph of edges not
+     * matched upwards, each tree's vertices matched to the edge towards its root. Why this loses
+     * nothing: the pairs above dimension 1 alone form a Morse matching whose critical edges are those
+     * of this graph and whose Morse boundary on them is the ordinary one, so the graph has β_0
+     * components and its forest f_0 − β_0 edges, the most any matching can pair with vertices. A
+     * forest closes no gradient path, and paths never mix the two layers. No-op unless
+     * {@link #graphBottom}.
+     */
+    private int[] withSpanningForest(int[] mates) {
+        if (!graphBottom) {
+            return mates;
+        }
+        Boundary boundary = complex.boundary();
+        Boundary coboundary = complex.coboundary();
+        int firstEdge = complex.firstCell(1);
+        int endEdge = complex.firstCell(2);
+        for (int v = 0; v < firstEdge; v++) {
+            if (mates[v] != Matching.CRITICAL) {
+                mates[mates[v]] = Matching.CRITICAL;
+                mates[v] = Matching.CRITICAL;
+            }
+        }
+        boolean[] reached = new boolean[firstEdge];
+        int[] queue = new int[firstEdge];
+        for (int root = 0; root < firstEdge; root++) {
+            if (reached[root]) {
+                continue;
+            }
+            reached[root] = true;
+            int tail = 0;
+            queue[tail++] = root;
+            for (int head = 0; head < tail; head++) {
+                int v = queue[head];
+                for (int i = coboundary.start(v); i < coboundary.end(v); i++) {
+                    int e = coboundary.target(i);
+                    if (e >= endEdge || mates[e] != Matching.CRITICAL || boundary.size(e) != 2) {
+                        continue;
+                    }
+                    int w = boundary.target(boundary.start(e)) == v ? boundary.target(boundary.start(e) + 1)
+                            : boundary.target(boundary.start(e));
+                    if (!reached[w]) {
+                        reached[w] = true;
+                        mates[w] = e;
+                        mates[e] = w;
+                        queue[tail++] = w;
+                    }
+                }
+            }
+        }
+        return mates;
     }
 
     /**
@@ -150,6 +229,9 @@ public final class OptimalMatchingSolver {
         Matching best = Matching.empty(n);
         for (MatchingHeuristic h : startFromHeuristics ? startingHeuristics(n) : List.<MatchingHeuristic>of()) {
             Matching m = h.match(complex, options);
+            if (MatchingVerifier.verify(complex, m).valid()) {
+                m = Matching.adopt(withSpanningForest(mates(m)));
+            }
             if (MatchingVerifier.verify(complex, m).valid() && m.pairCount() > best.pairCount()) {
                 best = m;
             }
@@ -163,12 +245,16 @@ public final class OptimalMatchingSolver {
                 Optimisation.Result result = solveModel(best, remainingMillis);
                 solves++;
                 Optimisation.State state = result.getState();
+                if (Boolean.getBoolean("morse.optimal.debug")) {
+                    System.err.println("solve " + solves + ": " + state + " value " + result.getValue() + " cuts " + cuts.size()
+                            + " at " + (System.nanoTime() - start) / 1_000_000 + " ms");
+                }
                 if (!state.isFeasible()) {
                     break;
                 }
-                int[] mates = chosenMates(result);
+                int[] mates = withSpanningForest(chosenMates(result));
                 if (state.isOptimal()) {
-                    upperPairs = Math.min(upperPairs, Math.round(result.getValue()));
+                    upperPairs = Math.min(upperPairs, Math.round(result.getValue()) + forestPairs);
                 }
                 List<int[]> cycles = shortestCycles(mates);
                 for (int[] cycle : cycles) {
@@ -210,15 +296,17 @@ public final class OptimalMatchingSolver {
             }
         }
         // Morse inequalities: at most f_k − (β_k + t_k + t_(k−1)) cells of dimension k are matched
-        for (int k = 0; k <= complex.dimension(); k++) {
-            Expression matched = model.addExpression("dimension" + k).upper(complex.cellCount(k) - dimensionBound[k]);
+        for (int k = graphBottom ? 1 : 0; k <= complex.dimension(); k++) {
+            // the spanning forest matches f_0 − β_0 vertices and as many edges
+            int fixed = graphBottom && k <= 1 ? forestPairs : 0;
+            Expression matched = model.addExpression("dimension" + k).upper(complex.cellCount(k) - dimensionBound[k] - fixed);
             for (int e = 0; e < edges; e++) {
                 if (complex.dimensionOf(edgeLower[e]) == k || complex.dimensionOf(edgeUpper[e]) == k) {
                     matched.set(x[e], 1);
                 }
             }
         }
-        Expression total = model.addExpression("pairs").upper((n - criticalBound) / 2);
+        Expression total = model.addExpression("pairs").upper((n - criticalBound) / 2 - forestPairs);
         for (int e = 0; e < edges; e++) {
             total.set(x[e], 1);
         }
@@ -232,6 +320,14 @@ public final class OptimalMatchingSolver {
         model.options.time_abort = timeMillis;
         model.options.time_suffice = timeMillis;
         return model.maximise();
+    }
+
+    private int[] mates(Matching m) {
+        int[] mates = new int[n];
+        for (int c = 0; c < n; c++) {
+            mates[c] = m.mate(c);
+        }
+        return mates;
     }
 
     private int[] chosenMates(Optimisation.Result result) {
@@ -305,13 +401,40 @@ public final class OptimalMatchingSolver {
                     in[c] = mates == null || (mates[c] != Matching.CRITICAL
                             && complex.dimensionOf(mates[c]) == (down ? d - 1 : d + 1));
                 }
-                core(first, end, in, down ? complex.boundary() : complex.coboundary(), down);
+                core(first, end, in, down, mates != null);
             }
         }
     }
 
-    private void core(int first, int end, boolean[] in, Boundary toNeighbours, boolean down) {
-        Boundary fromNeighbours = down ? complex.coboundary() : complex.boundary();
+    /**
+     * Adds the cut of each connected part of the core of {@code in}; for a solution's cells, also the
+     * cuts of the cores left when one cell of a part is taken out (up to {@value #SUB_CORES} per part),
+     * since the next solution would otherwise only trade that one cell for another.
+     */
+    private void core(int first, int end, boolean[] in, boolean down, boolean fromSolution) {
+        prune(first, end, in, down);
+        for (IntArrayList part : parts(first, end, in, down)) {
+            addCut(pairsOf(part, down), part.size() - 1);
+            if (!fromSolution) {
+                continue;
+            }
+            for (int k = 0; k < Math.min(part.size(), SUB_CORES); k++) {
+                boolean[] smaller = new boolean[n];
+                for (int v : part) {
+                    smaller[v] = true;
+                }
+                smaller[part.getInt(k)] = false;
+                prune(first, end, smaller, down);
+                for (IntArrayList rest : parts(first, end, smaller, down)) {
+                    addCut(pairsOf(rest, down), rest.size() - 1);
+                }
+            }
+        }
+    }
+
+    /** Removes from {@code in} every cell with a free face (free coface) relative to {@code in}, repeatedly. */
+    private void prune(int first, int end, boolean[] in, boolean down) {
+        Boundary toNeighbours = down ? complex.boundary() : complex.coboundary();
         int[] members = new int[n];
         for (int c = first; c < end; c++) {
             if (in[c]) {
@@ -333,43 +456,53 @@ public final class OptimalMatchingSolver {
                 }
             }
         }
-        // connected parts of the core: cells sharing a neighbour
-        int[] part = new int[n];
-        Arrays.fill(part, -1);
-        int[] stack = new int[n];
+    }
+
+    /** The connected parts of {@code in}: cells sharing a face (a coface). */
+    private List<IntArrayList> parts(int first, int end, boolean[] in, boolean down) {
+        Boundary toNeighbours = down ? complex.boundary() : complex.coboundary();
+        Boundary fromNeighbours = down ? complex.coboundary() : complex.boundary();
+        List<IntArrayList> parts = new ArrayList<>();
+        boolean[] seen = new boolean[n];
+        IntArrayList stack = new IntArrayList();
         for (int c = first; c < end; c++) {
-            if (!in[c] || part[c] >= 0) {
+            if (!in[c] || seen[c]) {
                 continue;
             }
             IntArrayList cells = new IntArrayList();
-            int top = 0;
-            stack[top++] = c;
-            part[c] = c;
-            while (top > 0) {
-                int v = stack[--top];
+            stack.add(c);
+            seen[c] = true;
+            while (!stack.isEmpty()) {
+                int v = stack.popInt();
                 cells.add(v);
                 for (int i = toNeighbours.start(v); i < toNeighbours.end(v); i++) {
                     int w = toNeighbours.target(i);
                     for (int j = fromNeighbours.start(w); j < fromNeighbours.end(w); j++) {
                         int u = fromNeighbours.target(j);
-                        if (in[u] && part[u] < 0) {
-                            part[u] = c;
-                            stack[top++] = u;
+                        if (in[u] && !seen[u]) {
+                            seen[u] = true;
+                            stack.add(u);
                         }
                     }
                 }
             }
-            IntArrayList edges = new IntArrayList();
-            for (int v : cells) {
-                for (int i = cellEdgeOffsets[v]; i < cellEdgeOffsets[v + 1]; i++) {
-                    int e = cellEdges[i];
-                    if ((down ? edgeUpper[e] : edgeLower[e]) == v) {
-                        edges.add(e);
-                    }
+            parts.add(cells);
+        }
+        return parts;
+    }
+
+    /** The variables pairing a cell of {@code cells} downwards (upwards). */
+    private int[] pairsOf(IntArrayList cells, boolean down) {
+        IntArrayList edges = new IntArrayList();
+        for (int v : cells) {
+            for (int i = cellEdgeOffsets[v]; i < cellEdgeOffsets[v + 1]; i++) {
+                int e = cellEdges[i];
+                if ((down ? edgeUpper[e] : edgeLower[e]) == v) {
+                    edges.add(e);
                 }
             }
-            addCut(edges.toIntArray(), cells.size() - 1);
         }
+        return edges.toIntArray();
     }
 
     /** Whether a neighbour of {@code c} joined by a unit incidence has {@code c} as its only member. */

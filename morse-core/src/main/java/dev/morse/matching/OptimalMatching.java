@@ -13,7 +13,7 @@ import java.util.Objects;
  * @param proven whether {@code matching} is proven optimal (no Morse matching has more pairs)
  * @param lowerBound no Morse matching of the complex leaves fewer critical cells than this
  * @param elapsed wall-clock time of the search
- * @param solves integer programs solved (0 when a heuristic already met the lower bound)
+ * @param solves integer programs solved (0 when the bounds met the incumbent without one)
  * @param cuts constraints added for acyclicity (cycle and core cuts)
  */
 public record OptimalMatching(Matching matching, int[] critical, boolean proven, long lowerBound, Duration elapsed,

@@ -25,35 +25,46 @@ import org.ojalgo.optimisation.Variable;
  * {@link MatchingVerifier} requires), each cell in at most one chosen pair, the number of pairs
  * maximised. Acyclicity is imposed lazily: each solution is searched for closed gradient paths
  * (directed cycles of the Hasse diagram with the chosen pairs reversed, which alternate between two
- * adjacent dimensions), and for each shortest one found, with k chosen pairs on it, the constraint
- * that at most k − 1 of those pairs are chosen is added before solving again. The first solution
- * without a closed path is optimal. The integer programs are solved by ojalgo's branch and bound.
+ * adjacent dimensions), and for each shortest one found, on upper cells S paired with lower cells T,
+ * the constraint that at most |S| − 1 pairs between T and S are chosen is added (Joswig and Pfetsch
+ * constrain only the pairs on the path; the lifted form is shown valid at {@link #addCycleCut}), and
+ * the program is solved again. The first solution without a closed path is optimal. The integer
+ * programs are solved by ojalgo's branch and bound.
  *
- * <p>Two further families of valid constraints shorten the search: the Morse inequalities
- * m_k ≥ β_k + t_k + t_(k−1) of each dimension (Forman, "Morse theory for cell complexes", 1998; t_k
- * the number of torsion factors of H_k, computed here by the Smith normal form) bound the matched
- * cells of each dimension. The best matching of the one-pass heuristics is the starting incumbent; when
- * it already meets the lower bound it is returned as proven without any integer program. A solution
- * with closed paths is also repaired (one pair of each closed path unmatched) into a valid matching
- * that may improve the incumbent, so that a run cut short by the time limit still returns its best.
+ * <p>What shortens the search, each valid for every Morse matching:
+ * <ul>
+ * <li>the Morse inequalities m_k ≥ β_k + t_k + t_(k−1) (Forman, "Morse theory for cell complexes",
+ * 1998; t_k the number of torsion factors of H_k, from the Smith normal form), with the Euler
+ * characteristic Σ (−1)^k m_k = χ, bound the critical cells of each dimension and in total;
+ * <li>core cuts: a set of cells of one dimension none of which has a free face relative to the set
+ * cannot be matched downwards entirely (dually upwards), see {@link #addCoreCuts};
+ * <li>vertices need no variables when every edge joins two vertices: a spanning forest of the edges
+ * left pairs f_0 − β_0 of them, the most possible ({@link #withSpanningForest});
+ * <li>the critical cells of the top dimension must meet every core of the top cells: a depth-first
+ * search for the fewest that do raises the bound of that dimension (at most half the time limit);
+ * <li>the best matching of the one-pass heuristics starts as incumbent, and a solution with closed
+ * paths is repaired (one pair of each unmatched) into a valid matching that may improve it, so that a
+ * run cut short by the time limit still returns its best.
+ * </ul>
+ * Whenever the incumbent meets the bound the search ends with proof, often before any program.
  *
  * <p>Size limit, measured (benchmarks/RESULTS.md): every complex of the hard library with at most
- * {@value #PROVEN_CELL_LIMIT} cells (Bing's house is the largest) is solved with proof in about a
- * second. The sum complex X_{0,1,3} on Z/17 (273 cells) is not proven within 60 seconds, and larger
- * ones end at the time limit of {@link MatchingOptions#timeLimit()} with the bound found so far. What
- * decides is less the size than how far the heuristics stay above the Morse lower bound: larger
- * complexes whose best heuristic meets it (the matching complex of K_7, the 4x5 chessboard complex)
- * are proven at once.
+ * {@value #PROVEN_CELL_LIMIT} cells is solved with proof within a few seconds each (the slowest, the
+ * sum complex X_{0,2,7} on Z/19 with 343 cells, in about 6 s). The 3-dimensional X_{0,2,5,6} on Z/13
+ * (597 cells) is not proven within 60 s. What decides is less the size than the gap between the
+ * heuristics and the bounds: a complex whose best heuristic meets the Morse bound is proven at once
+ * at any size up to {@value #MODEL_CELL_LIMIT} cells. The time limit
+ * ({@link MatchingOptions#timeLimit()}) is kept to within what ojalgo overruns its abort time by.
  * Above {@value #MODEL_CELL_LIMIT} cells no integer program is built and no homology computed: the
- * result is the best heuristic matching, with only the parity of the cell count as its bound. Memory: a few hundred bytes per pair of cells in
- * ojalgo's model.
+ * result is the best heuristic matching, with only |χ| as its bound. Memory: ojalgo's model, a few
+ * hundred bytes per candidate pair.
  */
 public final class OptimalMatchingSolver {
     /**
      * Every complex of {@code dev.morse.generate.HardLibrary} with at most this many cells is solved with
-     * proof within the default time limit (measured; the next larger one, 273 cells, is not).
+     * proof within the default time limit (measured; the next larger one, 597 cells, is not).
      */
-    public static final int PROVEN_CELL_LIMIT = 259;
+    public static final int PROVEN_CELL_LIMIT = 500;
 
     /** No integer program is built for complexes with more cells than this. */
     public static final int MODEL_CELL_LIMIT = 5_000;
@@ -68,7 +79,7 @@ public final class OptimalMatchingSolver {
     private final int[] cellEdgeOffsets;
     private final int[] cellEdges;
     private final int[] dimensionBound;
-    private final long criticalBound;
+    private long criticalBound;
     /** Whether every 1-cell is a graph edge, so that vertices are matched by a spanning forest. */
     private final boolean graphBottom;
     /** Pairs of a vertex and an edge in every optimal matching when {@link #graphBottom}: f_0 − β_0. */
@@ -112,15 +123,136 @@ public final class OptimalMatchingSolver {
         }
         List<HomologyGroup> groups = homology == null ? List.of() : homology.groups();
         dimensionBound = new int[complex.dimension() + 1];
-        long total = 0;
         for (int k = 0; k <= complex.dimension() && k < groups.size(); k++) {
             dimensionBound[k] = groups.get(k).betti() + groups.get(k).torsion().size()
                     + (k > 0 ? groups.get(k - 1).torsion().size() : 0);
-            total += dimensionBound[k];
         }
-        // a matching leaves cellCount − 2·pairs critical cells: the parity of the cell count
-        criticalBound = total + Math.floorMod(n - total, 2);
+        criticalBound = eulerBound(dimensionBound);
         forestPairs = graphBottom ? complex.cellCount(0) - groups.get(0).betti() : 0;
+    }
+
+    /**
+     * The fewest critical cells that per-dimension bounds {@code b_k} allow: every vector of critical
+     * counts has the Euler characteristic χ = Σ (−1)^k f_k as alternating sum (pairs join adjacent
+     * dimensions), so at least Σ b_k + |χ − Σ (−1)^k b_k| cells, the excess placed in one dimension
+     * of the right parity; this also gives the parity of the cell count.
+     */
+    private long eulerBound(int[] bounds) {
+        long total = 0;
+        long alternating = 0;
+        long euler = 0;
+        for (int k = 0; k < bounds.length; k++) {
+            total += bounds[k];
+            alternating += (k % 2 == 0 ? 1 : -1) * (long) bounds[k];
+            euler += (k % 2 == 0 ? 1 : -1) * (long) complex.cellCount(k);
+        }
+        return total + Math.abs(euler - alternating);
+    }
+
+    /** Raises the bound on critical cells of the top dimension, and the total with it. */
+    private void raiseTopBound(int top) {
+        int d = complex.dimension();
+        if (top > dimensionBound[d]) {
+            dimensionBound[d] = top;
+            criticalBound = Math.max(criticalBound, eulerBound(dimensionBound));
+        }
+    }
+
+    /**
+     * A lower bound on the critical cells of the top dimension: the fewest top cells whose removal
+     * leaves a set without core, found by a depth-first search that always branches on the cells of
+     * one small core. Why it bounds: the top cells a Morse matching pairs (all downwards) have an
+     * empty core (see {@link #addCoreCuts}), so its critical top cells meet every core. The search
+     * stops at {@code cap} (no need to prove more than a known matching leaves) or at the deadline,
+     * returning the size it was trying then, every smaller one having failed.
+     */
+    private int topCoreHittingBound(int cap, long deadline) {
+        int d = complex.dimension();
+        int first = complex.firstCell(d);
+        int end = complex.firstCell(d + 1);
+        for (int k = 0; k < cap; k++) {
+            boolean[] kept = new boolean[n];
+            Arrays.fill(kept, first, end, true);
+            Boolean found = hits(first, end, kept, k, deadline);
+            if (found == null) {
+                return k;
+            }
+            if (found) {
+                return k;
+            }
+        }
+        return cap;
+    }
+
+    /** Whether taking out at most {@code k} more cells empties the core; null at the deadline. */
+    private Boolean hits(int first, int end, boolean[] kept, int k, long deadline) {
+        if (System.nanoTime() > deadline) {
+            return null;
+        }
+        boolean[] core = kept.clone();
+        prune(first, end, core, true);
+        IntArrayList members = smallCore(first, end, core);
+        if (members.isEmpty()) {
+            return true;
+        }
+        if (k == 0 || disjointCores(first, end, core, members, k) > k) {
+            return false;
+        }
+        for (int v : members) {
+            kept[v] = false;
+            Boolean found = hits(first, end, kept, k - 1, deadline);
+            kept[v] = true;
+            if (found == null || found) {
+                return found;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * How many pairwise disjoint cores were found greedily, {@code members} being the first, counting
+     * no further than {@code k + 1}: each needs a cell of its own taken out.
+     */
+    private int disjointCores(int first, int end, boolean[] core, IntArrayList members, int k) {
+        boolean[] rest = core.clone();
+        int count = 0;
+        IntArrayList next = members;
+        while (!next.isEmpty() && count <= k) {
+            count++;
+            for (int v : next) {
+                rest[v] = false;
+            }
+            prune(first, end, rest, true);
+            next = smallCore(first, end, rest);
+        }
+        return count;
+    }
+
+    /** A core inside {@code core} from which no single cell could be taken out, when it was tried, without emptying it. */
+    private IntArrayList smallCore(int first, int end, boolean[] core) {
+        boolean[] current = core.clone();
+        for (int v = first; v < end; v++) {
+            if (!current[v]) {
+                continue;
+            }
+            boolean[] smaller = current.clone();
+            smaller[v] = false;
+            prune(first, end, smaller, true);
+            boolean empty = true;
+            for (int c = first; c < end && empty; c++) {
+                empty = !smaller[c];
+            }
+            if (!empty) {
+                current = smaller;
+            }
+        }
+        IntArrayList members = new IntArrayList();
+        for (int c = first; c < end; c++) {
+            if (current[c]) {
+                members.add(c);
+            }
+        }
+        return members;
     }
 
     /** Whether the boundary of every 1-cell is empty or v − w for two distinct vertices. */
@@ -197,21 +329,23 @@ public final class OptimalMatchingSolver {
      * {@link MatchingOptions#timeLimit()}; the seed goes to the randomised starting heuristic.
      */
     public static OptimalMatching solve(ChainComplex complex, MatchingOptions options) {
-        return solve(complex, options, true);
+        return solve(complex, options, true, true);
     }
 
     /**
-     * As {@link #solve(ChainComplex, MatchingOptions)}; without {@code startFromHeuristics} the search
-     * starts from the empty matching, so that the integer programs alone find the optimum (for tests).
+     * As {@link #solve(ChainComplex, MatchingOptions)}, for tests: without {@code startFromHeuristics}
+     * the search starts from the empty matching, and without {@code coreSearch} the bound on critical
+     * top cells is not searched for, so that the integer programs alone find the optimum.
      */
-    static OptimalMatching solve(ChainComplex complex, MatchingOptions options, boolean startFromHeuristics) {
+    static OptimalMatching solve(ChainComplex complex, MatchingOptions options, boolean startFromHeuristics,
+            boolean coreSearch) {
         long start = System.nanoTime();
         long deadline = start + options.timeLimit().toNanos();
         // beyond the model limit no program is built, and the Smith normal form would only cost time
         Homology homology = complex.cellCount() <= MODEL_CELL_LIMIT
                 ? HomologyCalculator.compute(complex, Coefficients.INTEGERS) : null;
         OptimalMatchingSolver solver = new OptimalMatchingSolver(complex, homology);
-        return solver.run(options, start, deadline, startFromHeuristics);
+        return solver.run(options, start, deadline, startFromHeuristics, coreSearch);
     }
 
     /** The heuristics whose best matching starts the search. */
@@ -225,7 +359,8 @@ public final class OptimalMatchingSolver {
         return list;
     }
 
-    private OptimalMatching run(MatchingOptions options, long start, long deadline, boolean startFromHeuristics) {
+    private OptimalMatching run(MatchingOptions options, long start, long deadline, boolean startFromHeuristics,
+            boolean coreSearch) {
         Matching best = Matching.empty(n);
         for (MatchingHeuristic h : startFromHeuristics ? startingHeuristics(n) : List.<MatchingHeuristic>of()) {
             Matching m = h.match(complex, options);
@@ -238,10 +373,18 @@ public final class OptimalMatchingSolver {
         }
         long upperPairs = (n - criticalBound) / 2;
         int solves = 0;
+        if (coreSearch && best.pairCount() < upperPairs && n <= MODEL_CELL_LIMIT && complex.dimension() >= 1) {
+            int top = complex.dimension();
+            // half the time at most, so that the integer programs get the rest
+            long searchDeadline = System.nanoTime() + (deadline - System.nanoTime()) / 2;
+            raiseTopBound(topCoreHittingBound(best.criticalCounts(complex)[top], searchDeadline));
+            upperPairs = (n - criticalBound) / 2;
+        }
         if (best.pairCount() < upperPairs && n <= MODEL_CELL_LIMIT) {
             addCoreCuts(null);
             while (System.nanoTime() < deadline) {
-                long remainingMillis = Math.max(1, (deadline - System.nanoTime()) / 1_000_000);
+                // ojalgo may overrun its abort time a little: ask for less than what is left
+                long remainingMillis = Math.max(1, (deadline - System.nanoTime()) / 1_250_000);
                 Optimisation.Result result = solveModel(best, remainingMillis);
                 solves++;
                 Optimisation.State state = result.getState();
@@ -435,6 +578,7 @@ public final class OptimalMatchingSolver {
     /** Removes from {@code in} every cell with a free face (free coface) relative to {@code in}, repeatedly. */
     private void prune(int first, int end, boolean[] in, boolean down) {
         Boundary toNeighbours = down ? complex.boundary() : complex.coboundary();
+        Boundary fromNeighbours = down ? complex.coboundary() : complex.boundary();
         int[] members = new int[n];
         for (int c = first; c < end; c++) {
             if (in[c]) {
@@ -443,16 +587,28 @@ public final class OptimalMatchingSolver {
                 }
             }
         }
-        boolean changed = true;
-        while (changed) {
-            changed = false;
-            for (int c = first; c < end; c++) {
-                if (in[c] && hasLooseNeighbour(c, toNeighbours, members)) {
-                    in[c] = false;
-                    for (int i = toNeighbours.start(c); i < toNeighbours.end(c); i++) {
-                        members[toNeighbours.target(i)]--;
+        IntArrayList queue = new IntArrayList();
+        for (int c = first; c < end; c++) {
+            if (in[c] && hasLooseNeighbour(c, toNeighbours, members)) {
+                queue.add(c);
+            }
+        }
+        while (!queue.isEmpty()) {
+            int c = queue.popInt();
+            if (!in[c]) {
+                continue;
+            }
+            in[c] = false;
+            for (int i = toNeighbours.start(c); i < toNeighbours.end(c); i++) {
+                int w = toNeighbours.target(i);
+                if (--members[w] == 1) {
+                    // the one cell left around w may now have a free face there
+                    for (int j = fromNeighbours.start(w); j < fromNeighbours.end(w); j++) {
+                        int u = fromNeighbours.target(j);
+                        if (in[u] && hasLooseNeighbour(u, toNeighbours, members)) {
+                            queue.add(u);
+                        }
                     }
-                    changed = true;
                 }
             }
         }

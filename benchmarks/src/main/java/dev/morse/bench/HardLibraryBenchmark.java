@@ -48,8 +48,8 @@ public class HardLibraryBenchmark {
     @Param({"coreduction", "collapse", "lexicographic", "random", "last-free-face", "freeing-collapse", "optimal"})
     public String heuristic;
 
-    /** The exact solver's time limit per complex, in seconds. */
-    @Param({"2"})
+    /** The exact solver's time limit per complex, in seconds (the default time limit is 20). */
+    @Param({"20"})
     public int seconds;
 
     private final List<ChainComplex> complexes = new ArrayList<>();

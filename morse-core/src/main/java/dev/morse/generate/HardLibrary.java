@@ -18,8 +18,7 @@ public final class HardLibrary {
                         new int[] {1, 1, 1},
                         "Zeeman 1964: contractible, not collapsible; no free edge, so every Morse matching leaves a"
                                 + " critical cell in dimensions 0, 1 and 2 (Forman 1998), and (1, 1, 1) is reached"),
-                new HardComplex("bings-house", new Generated.OfPoset(BingsHouse.facePoset(),
-                        "Bing's house with two rooms, a cubical complex of 70 squares"), null,
+                new HardComplex("bings-house", Families.bingsHouse(), null,
                         "Bing 1964; contractible without free faces, so at least (1, 1, 1) by the same argument"),
                 new HardComplex("rp2-6", new Generated.OfFacets(Triangulations.projectivePlane6(),
                         "the 6-vertex real projective plane"), new int[] {1, 1, 1},
@@ -54,8 +53,7 @@ public final class HardLibrary {
         for (int i = 0; i < a.length; i++) {
             name.append(i > 0 ? "." : "").append(a[i]);
         }
-        return new HardComplex(name.toString(), new Generated.OfFacets(SumComplex.facets(n, a),
-                "the sum complex X_A on Z/" + n + " with A = " + java.util.Arrays.toString(a)), optimum,
+        return new HardComplex(name.toString(), Families.sumComplex(n, a), optimum,
                 "Linial, Meshulam and Rosenthal 2010; " + source);
     }
 }

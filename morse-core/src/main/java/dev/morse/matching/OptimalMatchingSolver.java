@@ -191,11 +191,19 @@ public final class OptimalMatchingSolver {
         }
         boolean[] core = kept.clone();
         prune(first, end, core, true);
+        if (k == 0) {
+            for (int c = first; c < end; c++) {
+                if (core[c]) {
+                    return false;
+                }
+            }
+            return true;
+        }
         IntArrayList members = smallCore(first, end, core);
         if (members.isEmpty()) {
             return true;
         }
-        if (k == 0 || disjointCores(first, end, core, members, k) > k) {
+        if (disjointCores(first, end, core, members, k) > k) {
             return false;
         }
         for (int v : members) {
@@ -230,8 +238,21 @@ public final class OptimalMatchingSolver {
 
     /** A core inside {@code core} from which no single cell could be taken out, when it was tried, without emptying it. */
     private IntArrayList smallCore(int first, int end, boolean[] core) {
-        boolean[] current = core.clone();
-        for (int v = first; v < end; v++) {
+        // each connected part of a core is a core: a face two cells share keeps them in one part
+        IntArrayList smallest = null;
+        for (IntArrayList part : parts(first, end, core, true)) {
+            if (smallest == null || part.size() < smallest.size()) {
+                smallest = part;
+            }
+        }
+        if (smallest == null) {
+            return new IntArrayList();
+        }
+        boolean[] current = new boolean[n];
+        for (int v : smallest) {
+            current[v] = true;
+        }
+        for (int v : smallest) {
             if (!current[v]) {
                 continue;
             }

@@ -407,13 +407,9 @@ public final class OptimalMatchingSolver {
             while (System.nanoTime() < deadline) {
                 // ojalgo may overrun its abort time a little: ask for less than what is left
                 long remainingMillis = Math.max(1, (deadline - System.nanoTime()) / 1_250_000);
-                Optimisation.Result result = solveModel(best, remainingMillis);
+                Optimisation.Result result = solveModel(remainingMillis);
                 solves++;
                 Optimisation.State state = result.getState();
-                if (Boolean.getBoolean("morse.optimal.debug")) {
-                    System.err.println("solve " + solves + ": " + state + " value " + result.getValue() + " cuts " + cuts.size()
-                            + " at " + (System.nanoTime() - start) / 1_000_000 + " ms");
-                }
                 if (!state.isFeasible()) {
                     break;
                 }
@@ -445,7 +441,7 @@ public final class OptimalMatchingSolver {
                 Duration.ofNanos(System.nanoTime() - start), solves, cuts.size());
     }
 
-    private Optimisation.Result solveModel(Matching incumbent, long timeMillis) {
+    private Optimisation.Result solveModel(long timeMillis) {
         ExpressionsBasedModel model = new ExpressionsBasedModel();
         int edges = edgeLower.length;
         Variable[] x = new Variable[edges];

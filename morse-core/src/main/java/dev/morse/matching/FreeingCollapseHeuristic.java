@@ -10,9 +10,9 @@ import it.unimi.dsi.fastutil.ints.IntHeapPriorityQueue;
  * order, as in {@link LastFreeFaceHeuristic} (Benedetti and Lutz, Exp. Math. 23, 2014). When none is
  * left, the cell declared critical is, among the cells of the highest dimension left, one whose
  * removal frees the most faces (faces with exactly two cofaces left), ties going to the
- * lexicographically last. This choice rule is ours, not from the literature: it aims at the
- * situation Benedetti and Lutz describe for hard complexes, where a badly chosen critical cell lets
- * collapsing stop early again; benchmarks/RESULTS.md measures its effect on the hard library.
+ * lexicographically last. This choice rule is ours, not from the literature: a critical cell that
+ * frees no face lets collapsing stop again at once; benchmarks/RESULTS.md measures its effect on the
+ * hard library.
  *
  * <p>Acyclic for the same reason as {@link CollapseHeuristic}. Each critical choice scans the cells
  * of the current top dimension, so the time is O(N · c) for c critical cells of that kind; about 21

@@ -7,13 +7,12 @@ import it.unimi.dsi.fastutil.ints.IntHeapPriorityQueue;
 import java.util.Arrays;
 
 /**
- * Collapses in reverse lexicographic order, the deterministic strategy "rev-lex" of Benedetti and
- * Lutz ("Random discrete Morse theory and a new library of triangulations", Exp. Math. 23, 2014):
- * among the free faces left, always collapse the one whose vertex tuple
- * ({@link ChainComplex#vertexTuple}) is lexicographically last; they found this order to reach
- * smaller discrete Morse vectors than the lexicographically first one and than many random runs on
- * their library of hard triangulations. When no free face is left, the lexicographically last cell of
- * the highest dimension left is declared critical and removed, and collapsing resumes.
+ * Collapses in reverse lexicographic order, the deterministic "rev-lex" strategy that Benedetti and
+ * Lutz set beside random discrete Morse theory ("Random discrete Morse theory and a new library of
+ * triangulations", Exp. Math. 23, 2014; the strategy's details from memory): among the free faces
+ * left, always collapse the one whose vertex tuple ({@link ChainComplex#vertexTuple}) is
+ * lexicographically last. When no free face is left, the lexicographically last cell of the highest
+ * dimension left is declared critical and removed, and collapsing resumes.
  *
  * <p>Acyclic for the same reason as {@link CollapseHeuristic}: along a gradient path each step
  * reaches a pair removed strictly later. O(N log N) time; about 21 bytes per cell of working memory

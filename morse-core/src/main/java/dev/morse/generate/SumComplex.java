@@ -7,7 +7,7 @@ import java.util.List;
 
 /**
  * The sum complexes of Linial, Meshulam and Rosenthal ("Sum complexes — a new family of hypertrees",
- * Discrete Comput. Geom. 44, 2010): for {@code A} a set of {@code k + 1} residues modulo {@code n},
+ * Discrete Comput. Geom. 44, 2010; arXiv:0903.1359, whose abstract states the facts used below): for {@code A} a set of {@code k + 1} residues modulo {@code n},
  * the k-dimensional complex {@code X_A} on the vertex set Z/n with the full (k − 1)-dimensional
  * skeleton whose k-faces are the (k + 1)-subsets of Z/n whose sum lies in A. Vertices are labelled
  * {@code 0 .. n-1}.

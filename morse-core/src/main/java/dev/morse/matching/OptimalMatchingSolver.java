@@ -27,7 +27,7 @@ import org.ojalgo.optimisation.Variable;
  * (directed cycles of the Hasse diagram with the chosen pairs reversed, which alternate between two
  * adjacent dimensions), and for each shortest one found, on upper cells S paired with lower cells T,
  * the constraint that at most |S| − 1 pairs between T and S are chosen is added (Joswig and Pfetsch
- * constrain only the pairs on the path; the lifted form is shown valid at {@link #addCycleCut}), and
+ * constrain only the pairs on the path; the lifted form is shown valid at {@code addCycleCut}), and
  * the program is solved again. The first solution without a closed path is optimal. The integer
  * programs are solved by ojalgo's branch and bound.
  *
@@ -37,9 +37,9 @@ import org.ojalgo.optimisation.Variable;
  * 1998; t_k the number of torsion factors of H_k, from the Smith normal form), with the Euler
  * characteristic Σ (−1)^k m_k = χ, bound the critical cells of each dimension and in total;
  * <li>core cuts: a set of cells of one dimension none of which has a free face relative to the set
- * cannot be matched downwards entirely (dually upwards), see {@link #addCoreCuts};
+ * cannot be matched downwards entirely (dually upwards), see {@code addCoreCuts};
  * <li>vertices need no variables when every edge joins two vertices: a spanning forest of the edges
- * left pairs f_0 − β_0 of them, the most possible ({@link #withSpanningForest});
+ * left pairs f_0 − β_0 of them, the most possible ({@code withSpanningForest});
  * <li>the critical cells of the top dimension must meet every core of the top cells: a depth-first
  * search for the fewest that do raises the bound of that dimension (at most half the time limit);
  * <li>the best matching of the one-pass heuristics starts as incumbent, and a solution with closed
@@ -89,10 +89,14 @@ public final class OptimalMatchingSolver {
     private final List<int[]> cuts = new ArrayList<>();
     private final IntArrayList cutBounds = new IntArrayList();
     private final Set<String> cutKeys = new HashSet<>();
+    private final Cores cores;
+    private final ClosedPaths paths;
 
     private OptimalMatchingSolver(ChainComplex complex, Homology homology) {
         this.complex = complex;
         this.n = complex.cellCount();
+        this.cores = new Cores(complex);
+        this.paths = new ClosedPaths(complex);
         Boundary boundary = complex.boundary();
         graphBottom = homology != null && complex.dimension() >= 1 && edgesAreGraphEdges(complex);
         IntArrayList lower = new IntArrayList();
@@ -158,123 +162,6 @@ public final class OptimalMatchingSolver {
             dimensionBound[d] = top;
             criticalBound = Math.max(criticalBound, eulerBound(dimensionBound));
         }
-    }
-
-    /**
-     * A lower bound on the critical cells of the top dimension: the fewest top cells whose removal
-     * leaves a set without core, found by a depth-first search that always branches on the cells of
-     * one small core. Why it bounds: the top cells a Morse matching pairs (all downwards) have an
-     * empty core (see {@link #addCoreCuts}), so its critical top cells meet every core. The search
-     * starts at the bound already known for that dimension and stops at {@code cap} (no need to prove
-     * more than a known matching leaves) or at the deadline, returning the size it was trying then,
-     * every smaller one having failed or being excluded by the known bound.
-     */
-    private int topCoreHittingBound(int cap, long deadline) {
-        int d = complex.dimension();
-        int first = complex.firstCell(d);
-        int end = complex.firstCell(d + 1);
-        // below the bound already known the search could only find what proves nothing
-        for (int k = dimensionBound[d]; k < cap; k++) {
-            boolean[] kept = new boolean[n];
-            Arrays.fill(kept, first, end, true);
-            Boolean found = hits(first, end, kept, k, deadline);
-            if (found == null || found) {
-                return k;
-            }
-        }
-        return Math.max(cap, dimensionBound[d]);
-    }
-
-    /** Whether taking out at most {@code k} more cells empties the core; null at the deadline. */
-    private Boolean hits(int first, int end, boolean[] kept, int k, long deadline) {
-        if (System.nanoTime() > deadline) {
-            return null;
-        }
-        boolean[] core = kept.clone();
-        prune(first, end, core, true);
-        if (k == 0) {
-            for (int c = first; c < end; c++) {
-                if (core[c]) {
-                    return false;
-                }
-            }
-            return true;
-        }
-        IntArrayList members = smallCore(first, end, core);
-        if (members.isEmpty()) {
-            return true;
-        }
-        if (disjointCores(first, end, core, members, k) > k) {
-            return false;
-        }
-        for (int v : members) {
-            kept[v] = false;
-            Boolean found = hits(first, end, kept, k - 1, deadline);
-            kept[v] = true;
-            if (found == null || found) {
-                return found;
-            }
-        }
-        return false;
-    }
-
-    /**
-     * How many pairwise disjoint cores were found greedily, {@code members} being the first, counting
-     * no further than {@code k + 1}: each needs a cell of its own taken out.
-     */
-    private int disjointCores(int first, int end, boolean[] core, IntArrayList members, int k) {
-        boolean[] rest = core.clone();
-        int count = 0;
-        IntArrayList next = members;
-        while (!next.isEmpty() && count <= k) {
-            count++;
-            for (int v : next) {
-                rest[v] = false;
-            }
-            prune(first, end, rest, true);
-            next = smallCore(first, end, rest);
-        }
-        return count;
-    }
-
-    /** A core inside {@code core} from which no single cell could be taken out, when it was tried, without emptying it. */
-    private IntArrayList smallCore(int first, int end, boolean[] core) {
-        // each connected part of a core is a core: a face two cells share keeps them in one part
-        IntArrayList smallest = null;
-        for (IntArrayList part : parts(first, end, core, true)) {
-            if (smallest == null || part.size() < smallest.size()) {
-                smallest = part;
-            }
-        }
-        if (smallest == null) {
-            return new IntArrayList();
-        }
-        boolean[] current = new boolean[n];
-        for (int v : smallest) {
-            current[v] = true;
-        }
-        for (int v : smallest) {
-            if (!current[v]) {
-                continue;
-            }
-            boolean[] smaller = current.clone();
-            smaller[v] = false;
-            prune(first, end, smaller, true);
-            boolean empty = true;
-            for (int c = first; c < end && empty; c++) {
-                empty = !smaller[c];
-            }
-            if (!empty) {
-                current = smaller;
-            }
-        }
-        IntArrayList members = new IntArrayList();
-        for (int c = first; c < end; c++) {
-            if (current[c]) {
-                members.add(c);
-            }
-        }
-        return members;
     }
 
     /** Whether the boundary of every 1-cell is empty or v − w for two distinct vertices. */
@@ -399,7 +286,7 @@ public final class OptimalMatchingSolver {
             int top = complex.dimension();
             // half the time at most, so that the integer programs get the rest
             long searchDeadline = System.nanoTime() + (deadline - System.nanoTime()) / 2;
-            raiseTopBound(topCoreHittingBound(best.criticalCounts(complex)[top], searchDeadline));
+            raiseTopBound(cores.topCellBound(dimensionBound[top], best.criticalCounts(complex)[top], searchDeadline));
             upperPairs = (n - criticalBound) / 2;
         }
         if (best.pairCount() < upperPairs && n <= MODEL_CELL_LIMIT) {
@@ -417,12 +304,12 @@ public final class OptimalMatchingSolver {
                 if (state.isOptimal()) {
                     upperPairs = Math.min(upperPairs, Math.round(result.getValue()) + forestPairs);
                 }
-                List<int[]> cycles = shortestCycles(mates);
+                List<int[]> cycles = paths.shortestCycles(mates);
                 for (int[] cycle : cycles) {
                     addCycleCut(cycle, mates);
                 }
                 addCoreCuts(mates);
-                Matching repaired = Matching.adopt(repair(mates));
+                Matching repaired = Matching.adopt(paths.repair(mates));
                 if (repaired.pairCount() > best.pairCount()) {
                     best = repaired;
                 }
@@ -573,8 +460,8 @@ public final class OptimalMatchingSolver {
      * since the next solution would otherwise only trade that one cell for another.
      */
     private void core(int first, int end, boolean[] in, boolean down, boolean fromSolution) {
-        prune(first, end, in, down);
-        for (IntArrayList part : parts(first, end, in, down)) {
+        cores.prune(first, end, in, down);
+        for (IntArrayList part : cores.parts(first, end, in, down)) {
             addCut(pairsOf(part, down), part.size() - 1);
             if (!fromSolution) {
                 continue;
@@ -585,84 +472,12 @@ public final class OptimalMatchingSolver {
                     smaller[v] = true;
                 }
                 smaller[part.getInt(k)] = false;
-                prune(first, end, smaller, down);
-                for (IntArrayList rest : parts(first, end, smaller, down)) {
+                cores.prune(first, end, smaller, down);
+                for (IntArrayList rest : cores.parts(first, end, smaller, down)) {
                     addCut(pairsOf(rest, down), rest.size() - 1);
                 }
             }
         }
-    }
-
-    /** Removes from {@code in} every cell with a free face (free coface) relative to {@code in}, repeatedly. */
-    private void prune(int first, int end, boolean[] in, boolean down) {
-        Boundary toNeighbours = down ? complex.boundary() : complex.coboundary();
-        Boundary fromNeighbours = down ? complex.coboundary() : complex.boundary();
-        int[] members = new int[n];
-        for (int c = first; c < end; c++) {
-            if (in[c]) {
-                for (int i = toNeighbours.start(c); i < toNeighbours.end(c); i++) {
-                    members[toNeighbours.target(i)]++;
-                }
-            }
-        }
-        IntArrayList queue = new IntArrayList();
-        for (int c = first; c < end; c++) {
-            if (in[c] && hasLooseNeighbour(c, toNeighbours, members)) {
-                queue.add(c);
-            }
-        }
-        while (!queue.isEmpty()) {
-            int c = queue.popInt();
-            if (!in[c]) {
-                continue;
-            }
-            in[c] = false;
-            for (int i = toNeighbours.start(c); i < toNeighbours.end(c); i++) {
-                int w = toNeighbours.target(i);
-                if (--members[w] == 1) {
-                    // the one cell left around w may now have a free face there
-                    for (int j = fromNeighbours.start(w); j < fromNeighbours.end(w); j++) {
-                        int u = fromNeighbours.target(j);
-                        if (in[u] && hasLooseNeighbour(u, toNeighbours, members)) {
-                            queue.add(u);
-                        }
-                    }
-                }
-            }
-        }
-    }
-
-    /** The connected parts of {@code in}: cells sharing a face (a coface). */
-    private List<IntArrayList> parts(int first, int end, boolean[] in, boolean down) {
-        Boundary toNeighbours = down ? complex.boundary() : complex.coboundary();
-        Boundary fromNeighbours = down ? complex.coboundary() : complex.boundary();
-        List<IntArrayList> parts = new ArrayList<>();
-        boolean[] seen = new boolean[n];
-        IntArrayList stack = new IntArrayList();
-        for (int c = first; c < end; c++) {
-            if (!in[c] || seen[c]) {
-                continue;
-            }
-            IntArrayList cells = new IntArrayList();
-            stack.add(c);
-            seen[c] = true;
-            while (!stack.isEmpty()) {
-                int v = stack.popInt();
-                cells.add(v);
-                for (int i = toNeighbours.start(v); i < toNeighbours.end(v); i++) {
-                    int w = toNeighbours.target(i);
-                    for (int j = fromNeighbours.start(w); j < fromNeighbours.end(w); j++) {
-                        int u = fromNeighbours.target(j);
-                        if (in[u] && !seen[u]) {
-                            seen[u] = true;
-                            stack.add(u);
-                        }
-                    }
-                }
-            }
-            parts.add(cells);
-        }
-        return parts;
     }
 
     /** The variables pairing a cell of {@code cells} downwards (upwards). */
@@ -677,103 +492,5 @@ public final class OptimalMatchingSolver {
             }
         }
         return edges.toIntArray();
-    }
-
-    /** Whether a neighbour of {@code c} joined by a unit incidence has {@code c} as its only member. */
-    private static boolean hasLooseNeighbour(int c, Boundary toNeighbours, int[] members) {
-        for (int i = toNeighbours.start(c); i < toNeighbours.end(c); i++) {
-            int coefficient = toNeighbours.coefficient(i);
-            if ((coefficient == 1 || coefficient == -1) && members[toNeighbours.target(i)] == 1) {
-                return true;
-            }
-        }
-        return false;
-    }
-
-    /**
-     * For every upper cell of a pair, the shortest closed gradient path through it, if any, as the
-     * list of upper cells it passes. A path goes from an upper cell down to a face other than its
-     * partner (any nonzero incidence), and on from that face up to its own partner.
-     */
-    private List<int[]> shortestCycles(int[] mates) {
-        List<int[]> cycles = new ArrayList<>();
-        Set<String> seen = new HashSet<>();
-        int[] parent = new int[n];
-        int[] stamp = new int[n];
-        Arrays.fill(stamp, -1);
-        int[] queue = new int[n];
-        for (int root = 0; root < n; root++) {
-            if (!isUpper(root, mates)) {
-                continue;
-            }
-            int[] cycle = shortestCycleThrough(root, mates, parent, stamp, queue);
-            if (cycle != null) {
-                int[] key = cycle.clone();
-                Arrays.sort(key);
-                if (seen.add(Arrays.toString(key))) {
-                    cycles.add(cycle);
-                }
-            }
-        }
-        return cycles;
-    }
-
-    private boolean isUpper(int c, int[] mates) {
-        return mates[c] != Matching.CRITICAL && complex.dimensionOf(mates[c]) == complex.dimensionOf(c) - 1;
-    }
-
-    private int[] shortestCycleThrough(int root, int[] mates, int[] parent, int[] stamp, int[] queue) {
-        Boundary boundary = complex.boundary();
-        int tail = 0;
-        queue[tail++] = root;
-        stamp[root] = root;
-        for (int head = 0; head < tail; head++) {
-            int s = queue[head];
-            for (int i = boundary.start(s); i < boundary.end(s); i++) {
-                int t = boundary.target(i);
-                if (t == mates[s]) {
-                    continue;
-                }
-                int next = mates[t];
-                if (next == Matching.CRITICAL || !isUpper(next, mates)) {
-                    continue;
-                }
-                if (next == root) {
-                    IntArrayList path = new IntArrayList();
-                    for (int v = s; v != root; v = parent[v]) {
-                        path.add(v);
-                    }
-                    path.add(root);
-                    return path.toIntArray();
-                }
-                if (stamp[next] != root) {
-                    stamp[next] = root;
-                    parent[next] = s;
-                    queue[tail++] = next;
-                }
-            }
-        }
-        return null;
-    }
-
-    /** Unmatches one pair of each closed path until none is left: a valid Morse matching. */
-    private int[] repair(int[] chosen) {
-        int[] mates = chosen.clone();
-        int[] parent = new int[n];
-        int[] stamp = new int[n];
-        int[] queue = new int[n];
-        boolean changed = true;
-        while (changed) {
-            changed = false;
-            Arrays.fill(stamp, -1);
-            for (int root = 0; root < n; root++) {
-                if (isUpper(root, mates) && shortestCycleThrough(root, mates, parent, stamp, queue) != null) {
-                    mates[mates[root]] = Matching.CRITICAL;
-                    mates[root] = Matching.CRITICAL;
-                    changed = true;
-                }
-            }
-        }
-        return mates;
     }
 }

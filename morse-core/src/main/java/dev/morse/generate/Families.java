@@ -87,6 +87,17 @@ public final class Families {
                 + " board");
     }
 
+    /** The sum complex {@code X_A} on Z/n of Linial, Meshulam and Rosenthal ({@link SumComplex}). */
+    public static Generated sumComplex(int n, int[] a) {
+        return new Generated.OfFacets(SumComplex.facets(n, a), "the sum complex X_A on Z/" + n + " with A = "
+                + java.util.Arrays.toString(a));
+    }
+
+    /** Bing's house with two rooms as a cubical complex ({@link BingsHouse}): contractible, no free face. */
+    public static Generated bingsHouse() {
+        return new Generated.OfPoset(BingsHouse.facePoset(), "Bing's house with two rooms, a cubical complex of 70 squares");
+    }
+
     /** A solid block with straight tunnels and sealed cavities ({@link VoxelBlock}). */
     public static Generated voxelBlock(int side, int tunnels, int cavities) {
         VoxelBlock block = VoxelBlock.of(side, tunnels, cavities);

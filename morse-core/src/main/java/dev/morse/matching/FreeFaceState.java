@@ -39,6 +39,11 @@ final class FreeFaceState {
         return removed[c];
     }
 
+    /** How many cofaces of {@code c} are left. */
+    int cofacesLeft(int c) {
+        return cofacesLeft[c];
+    }
+
     /**
      * Collapses the free face {@code t} with its last coface when their incidence is a unit, telling
      * {@code newlyFree} of faces that become free; returns whether it did.

@@ -31,9 +31,33 @@ public final class MatchingHeuristics {
         return Collections.unmodifiableMap(byName);
     }
 
-    /** The heuristic with this name, if any. */
+    /** The heuristic with this name, if any: one of {@link #all()} or of {@link #onRequest()}. */
     public static Optional<MatchingHeuristic> byName(String name) {
-        return Optional.ofNullable(all().get(name));
+        MatchingHeuristic found = all().get(name);
+        if (found == null) {
+            found = onRequest().stream().filter(h -> h.name().equals(name)).findFirst().orElse(null);
+        }
+        return Optional.ofNullable(found);
+    }
+
+    /**
+     * Heuristics of this library found by {@link #byName} but left out of {@link #all()} and
+     * {@link #names()}, so that whatever runs every heuristic by default does not run them: the exact
+     * solver {@code optimal}, which may take up to its time limit, and the collapse orders
+     * {@code last-free-face} and {@code freeing-collapse}, measured against the others on the hard
+     * library. A fresh list each call.
+     */
+    public static List<MatchingHeuristic> onRequest() {
+        return List.of(new LastFreeFaceHeuristic(), new FreeingCollapseHeuristic(), new OptimalHeuristic());
+    }
+
+    /** {@link #all()} followed by {@link #onRequest()}, by name. A fresh unmodifiable map each call. */
+    public static Map<String, MatchingHeuristic> everyKnown() {
+        Map<String, MatchingHeuristic> byName = new LinkedHashMap<>(all());
+        for (MatchingHeuristic h : onRequest()) {
+            byName.putIfAbsent(h.name(), h);
+        }
+        return Collections.unmodifiableMap(byName);
     }
 
     /** The names of the heuristics that come with this library, in order; {@code none} is last. */

@@ -1,0 +1,30 @@
+package dev.morse.matching;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+class MatchingHeuristicsTest {
+    @Test
+    void theHeuristicsOnRequestAreFoundByNameButNotListedByDefault() {
+        // names() is what runs by default (compare, the property tests): the exact solver is not in it
+        assertEquals(List.of("coreduction", "collapse", "lexicographic", "random", "none"),
+                MatchingHeuristics.builtInNames());
+        assertInstanceOf(OptimalHeuristic.class, MatchingHeuristics.byName("optimal").orElseThrow());
+        assertInstanceOf(LastFreeFaceHeuristic.class, MatchingHeuristics.byName("last-free-face").orElseThrow());
+        assertInstanceOf(FreeingCollapseHeuristic.class, MatchingHeuristics.byName("freeing-collapse").orElseThrow());
+        assertTrue(MatchingHeuristics.byName("steepest").isEmpty());
+        assertTrue(!MatchingHeuristics.names().contains("optimal"));
+    }
+
+    @Test
+    void everyKnownListsTheDefaultOnesThenThoseOnRequest() {
+        List<String> names = List.copyOf(MatchingHeuristics.everyKnown().keySet());
+        assertEquals(MatchingHeuristics.names(), names.subList(0, MatchingHeuristics.names().size()));
+        assertEquals(List.of("last-free-face", "freeing-collapse", "optimal"),
+                names.subList(MatchingHeuristics.names().size(), names.size()));
+    }
+}

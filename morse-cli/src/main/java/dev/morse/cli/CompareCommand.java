@@ -50,6 +50,10 @@ final class CompareCommand implements Callable<Integer> {
     @Mixin
     private JsonOption output;
 
+    @Option(names = "--no-optimum", description = "Do not seek the exact optimum (sought by default on stored"
+            + " complexes of at most 500 cells, within --time-limit).")
+    private boolean noOptimum;
+
     @Option(names = "--plot", paramLabel = "FILE.svg",
             description = "Also draw a bar chart of critical cells per dimension and matching, bounds marked, as SVG.")
     private Path plot;
@@ -68,7 +72,7 @@ final class CompareCommand implements Callable<Integer> {
             }
         }
         ComparisonReport report = run.around(spec, () -> HeuristicComparison.run(input.read(spec), request,
-                Optional.ofNullable(matchings)));
+                Optional.ofNullable(matchings), !noOptimum));
         String text = output.json() ? ComparisonJsonWriter.toJson(report) : ComparisonTextWriter.toText(report);
         if (plot != null) {
             OutputFiles.write(plot, ComparisonChartSvg.toSvg(report));

@@ -51,7 +51,7 @@ final class EngineOptions {
     Request request(CommandSpec spec, MatchingRuns runs, String matching) {
         try {
             return new Request(complex, coefficients, reduced, matching, runs.seed(), runs.trials(), runs.verify(),
-                    !noPosetReduction, elementOrder, maxStoredChains, Long.MAX_VALUE);
+                    !noPosetReduction, elementOrder, maxStoredChains, Long.MAX_VALUE, runs.timeLimit());
         } catch (IllegalArgumentException e) {
             throw new ParameterException(spec.commandLine(), e.getMessage());
         }

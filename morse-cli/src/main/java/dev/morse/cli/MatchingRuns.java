@@ -16,6 +16,12 @@ final class MatchingRuns {
     @Option(names = "--no-verify", description = "Trust the matching without checking that it is acyclic.")
     private boolean noVerify;
 
+    @Option(names = "--time-limit", paramLabel = "SECONDS", defaultValue = "20",
+            description = "How long a matching that searches may take: the exact optimum (--matching optimal, and the"
+                    + " optimum column of compare) gives its best matching and bound when time is up"
+                    + " (default ${DEFAULT-VALUE}).")
+    private long timeLimitSeconds;
+
     long seed() {
         return seed;
     }
@@ -26,5 +32,10 @@ final class MatchingRuns {
 
     boolean verify() {
         return !noVerify;
+    }
+
+    /** The time limit, as given in seconds. */
+    java.time.Duration timeLimit() {
+        return java.time.Duration.ofSeconds(timeLimitSeconds);
     }
 }

@@ -44,10 +44,33 @@ class CompareCommandTest {
         // H_1(RP^2) = Z/2, and Forman's bound is 1 + 1 + 1 (β_0; t_1; t_1 again in dimension 2)
         assertEquals("  homology  H_0 = Z, H_1 = Z/2, H_2 = 0 (by coreduction; every matching agrees)", lines.get(3));
         assertEquals("  bound     Morse lower bound 3 = 1 + 1 + 1 in dimensions 0..2", lines.get(4));
-        assertTrue(lines.get(6).matches("  matching +critical +total +excess +match +verify +sweep +reduce +homology +all"
-                + " +peak heap"), lines.get(6));
-        List<String> names = lines.subList(7, 11).stream().map(l -> l.strip().split(" +")[0]).toList();
+        // the 6-vertex RP^2 has a perfect Morse matching, (1, 1, 1) (Forman 1998: the bound is met), and the
+        // exact search proves it
+        assertTrue(lines.get(5).startsWith("  optimum   3 = 1 + 1 + 1 in dimensions 0..2, proven optimal by the exact"
+                + " search (combinatorial bounds, then integer programming after Joswig-Pfetsch) in "), lines.get(5));
+        assertTrue(lines.get(7).matches("  matching +critical +total +excess +gap +match +verify +sweep +reduce"
+                + " +homology +all +peak heap"), lines.get(7));
+        List<String> names = lines.subList(8, 12).stream().map(l -> l.strip().split(" +")[0]).toList();
         assertEquals(List.of("coreduction", "collapse", "lexicographic", "random"), names);
+    }
+
+    @Test
+    @SuppressWarnings("unchecked")
+    void theDunceHatNeedsThreeCriticalCellsAndEachRowShowsItsGap() throws IOException {
+        // the dunce hat is contractible but every discrete Morse function on it has a critical cell in
+        // each of the dimensions 0, 1 and 2 (Zeeman 1964; Forman 1998), so the optimum is (1, 1, 1)
+        String file = Inputs.write(dir, "dunce.simplicial", dev.morse.io.SimplicialWriter.toText(
+                dev.morse.generate.Triangulations.dunceHat8()));
+        Map<String, Object> json = json("compare", file, "--json");
+        Map<String, Object> optimum = (Map<String, Object>) json.get("optimum");
+        assertEquals(List.of(BigInteger.ONE, BigInteger.ONE, BigInteger.ONE), optimum.get("critical"));
+        assertEquals(Boolean.TRUE, optimum.get("proven"));
+        for (Map<String, Object> run : matchings(json)) {
+            BigInteger total = (BigInteger) run.get("total");
+            assertEquals(total.subtract(BigInteger.valueOf(3)), run.get("gap"), (String) run.get("matching"));
+        }
+        Map<String, Object> without = json("compare", file, "--json", "--no-optimum");
+        assertTrue(!without.containsKey("optimum"));
     }
 
     @Test

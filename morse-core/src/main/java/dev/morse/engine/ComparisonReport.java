@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import dev.morse.matching.OptimalMatching;
 
 /**
  * Several matching heuristics run on one complex: the complex, its integral homology (computed
@@ -26,10 +27,12 @@ import java.util.Optional;
  * @param setup the phases before the heuristics ran ({@code read}, {@code complex})
  * @param runs one run per heuristic, in the order asked for
  * @param seed the seed of the first (or only) run of each heuristic
+ * @param optimum the exact optimum of the matchings on this complex, or the best found with its bound
+ *     when the search ran out of time; empty when it was not sought
  */
 public record ComparisonReport(String input, InputFormat format, ComplexKind complex, List<Long> cells,
         Optional<CwPosetVerdict> cwCheck, Homology homology, boolean reducedShown, String referenceMatching, List<PhaseTiming> setup,
-        List<MatchingRun> runs, long seed) {
+        List<MatchingRun> runs, long seed, Optional<OptimalMatching> optimum) {
     /** Validates and copies. */
     public ComparisonReport {
         Objects.requireNonNull(input, "input");
@@ -79,6 +82,11 @@ public record ComparisonReport(String input, InputFormat format, ComplexKind com
     /** The homology as reports show it: reduced when asked for. */
     public Homology shownHomology() {
         return reducedShown ? homology.toReduced() : homology;
+    }
+
+    /** Critical cells of {@code run} beyond the best matching found by the exact search, when it ran. */
+    public Optional<Long> gap(MatchingRun run) {
+        return optimum.map(o -> run.totalCritical() - o.criticalTotal());
     }
 
     /** Total number of cells. */

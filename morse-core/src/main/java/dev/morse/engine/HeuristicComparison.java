@@ -5,6 +5,8 @@ import dev.morse.implicit.ElementOrder;
 import dev.morse.input.Input;
 import dev.morse.io.InputException;
 import dev.morse.matching.MatchingHeuristics;
+import dev.morse.matching.OptimalMatching;
+import dev.morse.matching.OptimalMatchingSolver;
 import dev.morse.progress.HeapPeaks;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -44,6 +46,17 @@ public final class HeuristicComparison {
      * @throws IllegalStateException when a matching fails verification or disagrees with the reference
      */
     public static ComparisonReport run(Input input, Request request, Optional<List<String>> matchings) {
+        return run(input, request, matchings, false);
+    }
+
+    /**
+     * As {@link #run(Input, Request, Optional)}, and when {@code optimum} is asked for and the complex
+     * is stored with at most {@link OptimalMatchingSolver#PROVEN_CELL_LIMIT} cells, also the exact
+     * optimum of the matchings (Joswig–Pfetsch integer programming, within the request's time limit),
+     * against which every row's gap is shown.
+     */
+    public static ComparisonReport run(Input input, Request request, Optional<List<String>> matchings,
+            boolean optimum) {
         List<String> names = matchings.map(HeuristicComparison::requireComparable)
                 .orElseGet(HeuristicComparison::defaultMatchings);
         List<String> heuristics = names.stream().filter(n -> !n.startsWith(IMPLICIT_ROW)).toList();
@@ -91,8 +104,14 @@ public final class HeuristicComparison {
         List<PhaseTiming> setup = reference.timings().stream()
                 .filter(t -> t.phase().equals("read") || t.phase().equals("poset reduction") || t.phase().equals("complex"))
                 .toList();
+        Optional<OptimalMatching> best = Optional.empty();
+        if (optimum && plan.stored().isPresent()
+                && plan.stored().get().cellCount() <= OptimalMatchingSolver.PROVEN_CELL_LIMIT) {
+            best = Optional.of(OptimalMatchingSolver.solve(plan.stored().get(), request.matchingOptions()));
+        }
         return new ComparisonReport(input.source(), input.format(), plan.kind(), reference.cells(), plan.cwCheck(),
-                reference.unreducedHomology(), request.reduced(), rows.get(0).matching(), setup, rows, request.seed());
+                reference.unreducedHomology(), request.reduced(), rows.get(0).matching(), setup, rows, request.seed(),
+                best);
     }
 
     /**

@@ -4,6 +4,8 @@ import dev.morse.complex.ComplexChoice;
 import dev.morse.homology.Coefficients;
 import dev.morse.implicit.ElementOrder;
 import dev.morse.matching.MatchingHeuristics;
+import dev.morse.matching.MatchingOptions;
+import java.time.Duration;
 import java.util.Objects;
 
 /**
@@ -23,10 +25,11 @@ import java.util.Objects;
  *     the implicit order complex
  * @param maxStoredCells the most cells a stored complex may have before building it is refused
  *     (pictures ask for few)
+ * @param matchingTimeLimit how long a matching that searches (the exact optimum) may take
  */
 public record Request(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching, long seed,
         int trials, boolean verify, boolean posetReduction, ElementOrder elementOrder, long storedChainLimit,
-        long maxStoredCells) {
+        long maxStoredCells, Duration matchingTimeLimit) {
     /** The matching name that means no Morse reduction: every cell is critical. */
     public static final String NO_MATCHING = "none";
 
@@ -59,12 +62,15 @@ public record Request(ComplexChoice complex, Coefficients coefficients, boolean 
         if (maxStoredCells < 1) {
             throw new IllegalArgumentException("the cell limit must be positive");
         }
+        if (matchingTimeLimit == null || matchingTimeLimit.isNegative() || matchingTimeLimit.isZero()) {
+            throw new IllegalArgumentException("the time limit must be positive");
+        }
     }
 
     /** The defaults: automatic choice of complex, integer coefficients, unreduced, the default matching. */
     public static Request defaults() {
         return new Request(ComplexChoice.AUTO, Coefficients.INTEGERS, false, MatchingHeuristics.DEFAULT, 1L, 1, true,
-                true, ElementOrder.DOWN_SETS, DEFAULT_STORED_CHAIN_LIMIT, Long.MAX_VALUE);
+                true, ElementOrder.DOWN_SETS, DEFAULT_STORED_CHAIN_LIMIT, Long.MAX_VALUE, MatchingOptions.DEFAULT_TIME_LIMIT);
     }
 
     /**
@@ -83,42 +89,53 @@ public record Request(ComplexChoice complex, Coefficients coefficients, boolean 
     /** This request with another choice of complex. */
     public Request withComplex(ComplexChoice choice) {
         return new Request(choice, coefficients, reduced, matching, seed, trials, verify, posetReduction, elementOrder,
-                storedChainLimit, maxStoredCells);
+                storedChainLimit, maxStoredCells, matchingTimeLimit);
     }
 
     /** This request with other coefficients and reduced or unreduced homology. */
     public Request withHomology(Coefficients ring, boolean reducedHomology) {
         return new Request(complex, ring, reducedHomology, matching, seed, trials, verify, posetReduction,
-                elementOrder, storedChainLimit, maxStoredCells);
+                elementOrder, storedChainLimit, maxStoredCells, matchingTimeLimit);
     }
 
     /** This request with another matching, seed and number of trials. */
     public Request withMatching(String name, long seedValue, int trialCount) {
         return new Request(complex, coefficients, reduced, name, seedValue, trialCount, verify, posetReduction,
-                elementOrder, storedChainLimit, maxStoredCells);
+                elementOrder, storedChainLimit, maxStoredCells, matchingTimeLimit);
     }
 
     /** This request with verification of the matching switched on or off. */
     public Request withVerify(boolean on) {
         return new Request(complex, coefficients, reduced, matching, seed, trials, on, posetReduction, elementOrder,
-                storedChainLimit, maxStoredCells);
+                storedChainLimit, maxStoredCells, matchingTimeLimit);
     }
 
     /** This request with poset reduction switched on or off. */
     public Request withPosetReduction(boolean on) {
         return new Request(complex, coefficients, reduced, matching, seed, trials, verify, on, elementOrder,
-                storedChainLimit, maxStoredCells);
+                storedChainLimit, maxStoredCells, matchingTimeLimit);
     }
 
     /** This request with another element order and stored chain limit for the implicit order complex. */
     public Request withImplicit(ElementOrder order, long limit) {
         return new Request(complex, coefficients, reduced, matching, seed, trials, verify, posetReduction, order, limit,
-                maxStoredCells);
+                maxStoredCells, matchingTimeLimit);
+    }
+
+    /** This request with another time limit for matchings that search. */
+    public Request withMatchingTimeLimit(Duration limit) {
+        return new Request(complex, coefficients, reduced, matching, seed, trials, verify, posetReduction, elementOrder,
+                storedChainLimit, maxStoredCells, limit);
+    }
+
+    /** The options the matching heuristic is given: the seed and the time limit. */
+    public MatchingOptions matchingOptions() {
+        return new MatchingOptions(seed, matchingTimeLimit);
     }
 
     /** This request refusing stored complexes of more than {@code cells} cells. */
     public Request withMaxStoredCells(long cells) {
         return new Request(complex, coefficients, reduced, matching, seed, trials, verify, posetReduction, elementOrder,
-                storedChainLimit, cells);
+                storedChainLimit, cells, matchingTimeLimit);
     }
 }

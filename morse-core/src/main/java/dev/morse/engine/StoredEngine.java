@@ -3,7 +3,6 @@ package dev.morse.engine;
 import dev.morse.input.Input;
 import dev.morse.matching.MatchingHeuristic;
 import dev.morse.matching.MatchingHeuristics;
-import dev.morse.matching.MatchingOptions;
 import dev.morse.matching.MatchingTrials;
 import dev.morse.matching.TrialCount;
 import dev.morse.morsecomplex.MorseReduction;
@@ -35,7 +34,7 @@ public final class StoredEngine implements ComputationEngine {
         }
         MatchingHeuristic heuristic = MatchingHeuristics.byName(request.matching()).orElseThrow();
         MorseReduction.Outcome outcome = MorseReduction.run(plan.stored().get(), new MorseReduction.Request(heuristic,
-                new MatchingOptions(request.seed()), request.coefficients(), request.verify()));
+                request.matchingOptions(), request.coefficients(), request.verify()));
         List<TrialCount> trials = List.of();
         List<PhaseTiming> after = List.of();
         if (request.trials() > 1) {

@@ -2,6 +2,7 @@ package dev.morse.report;
 
 import dev.morse.engine.ComparisonReport;
 import dev.morse.engine.MatchingRun;
+import dev.morse.matching.OptimalMatching;
 import dev.morse.engine.PhaseTiming;
 
 import com.fasterxml.jackson.core.JsonGenerator;
@@ -12,9 +13,12 @@ import java.util.Locale;
  * Writes a {@link ComparisonReport} as one JSON object: {@code input}, {@code format},
  * {@code complex}, {@code cells}, {@code cw_check} (as in homology reports), {@code coefficients}
  * (those asked for), {@code reduced}, {@code homology}, {@code reference_matching} (whose run gave it),
+ * {@code optimum} (when sought: the best matching's {@code critical} and {@code total}, whether it is
+ * {@code proven} optimal, the {@code lower_bound} proven, {@code ms}),
  * {@code morse_lower_bound}, {@code lower_bound_by_dimension}, {@code seed}, {@code timings_ms}
  * ({@code read}, {@code complex}) and {@code matchings}: one object per heuristic with
- * {@code matching}, {@code critical}, {@code total}, {@code excess}, {@code timings_ms},
+ * {@code matching}, {@code critical}, {@code total}, {@code excess}, {@code gap} (beyond the optimum, when
+ * sought), {@code timings_ms},
  * {@code peak_heap_bytes} (approximate; -1 when unknown) and, for randomized heuristics run several
  * times, {@code trials} (each critical vector with its {@code count}).
  */
@@ -35,6 +39,9 @@ public final class ComparisonJsonWriter {
             json.writeBooleanField("reduced", report.reducedShown());
             JsonReportWriter.writeHomology(json, report.shownHomology().groups());
             json.writeStringField("reference_matching", report.referenceMatching());
+            if (report.optimum().isPresent()) {
+                writeOptimum(json, report.optimum().get());
+            }
             json.writeNumberField("morse_lower_bound", report.morseLowerBound());
             JsonStyle.intArray(json, "lower_bound_by_dimension", report.boundByDimension());
             json.writeNumberField("seed", report.seed());
@@ -52,12 +59,25 @@ public final class ComparisonJsonWriter {
         });
     }
 
+    private static void writeOptimum(JsonGenerator json, OptimalMatching o) throws IOException {
+        json.writeObjectFieldStart("optimum");
+        JsonStyle.intArray(json, "critical", java.util.Arrays.stream(o.critical()).boxed().toList());
+        json.writeNumberField("total", o.criticalTotal());
+        json.writeBooleanField("proven", o.proven());
+        json.writeNumberField("lower_bound", o.lowerBound());
+        json.writeNumberField("ms", o.elapsed().toMillis());
+        json.writeEndObject();
+    }
+
     private static void writeRun(JsonGenerator json, ComparisonReport report, MatchingRun run) throws IOException {
         json.writeStartObject();
         json.writeStringField("matching", run.matching());
         JsonStyle.intArray(json, "critical", run.critical());
         json.writeNumberField("total", run.totalCritical());
         json.writeNumberField("excess", report.excess(run));
+        if (report.gap(run).isPresent()) {
+            json.writeNumberField("gap", report.gap(run).get());
+        }
         json.writeObjectFieldStart("timings_ms");
         for (PhaseTiming t : run.timings()) {
             JsonStyle.millis(json, t.phase(), t.milliseconds());

@@ -2,6 +2,7 @@ package dev.morse.report;
 
 import dev.morse.engine.ComparisonReport;
 import dev.morse.engine.MatchingRun;
+import dev.morse.matching.OptimalMatching;
 
 import dev.morse.homology.HomologyGroup;
 import dev.morse.matching.TrialCount;
@@ -34,6 +35,7 @@ public final class ComparisonTextWriter {
         row(text, "homology", homologyLine(report) + " (by " + report.referenceMatching()
                 + (report.runs().size() > 1 ? "; every matching agrees)" : ")"));
         row(text, "bound", "Morse lower bound " + counted(report.boundByDimension()));
+        report.optimum().ifPresent(o -> row(text, "optimum", optimumLine(o)));
         text.append('\n');
         table(text, report);
         for (MatchingRun run : report.runs()) {
@@ -55,6 +57,9 @@ public final class ComparisonTextWriter {
     private static void table(StringBuilder text, ComparisonReport report) {
         List<String[]> rows = new ArrayList<>();
         List<String> header = new ArrayList<>(List.of("matching", "critical", "total", "excess"));
+        if (report.optimum().isPresent()) {
+            header.add("gap");
+        }
         header.addAll(PHASES);
         header.add("all");
         header.add("peak heap");
@@ -62,6 +67,7 @@ public final class ComparisonTextWriter {
         for (MatchingRun run : report.runs()) {
             List<String> cells = new ArrayList<>(List.of(run.matching(), spaced(run.critical()),
                     Long.toString(run.totalCritical()), Long.toString(report.excess(run))));
+            report.gap(run).ifPresent(gap -> cells.add(Long.toString(gap)));
             for (String phase : PHASES) {
                 double ms = run.millis(phase);
                 cells.add(ms < 0 ? "-" : String.format(Locale.ROOT, "%.2f", ms));
@@ -86,6 +92,19 @@ public final class ComparisonTextWriter {
             }
             text.append(line.toString().stripTrailing()).append('\n');
         }
+    }
+
+    /**
+     * The exact search's answer: a proven optimum, or the best matching found with the bound proven
+     * when time ran out. The gap column counts critical cells beyond that best matching.
+     */
+    private static String optimumLine(OptimalMatching o) {
+        String found = counted(java.util.Arrays.stream(o.critical()).boxed().toList());
+        return o.proven()
+                ? found + ", proven optimal by the exact search (combinatorial bounds, then integer programming after Joswig-Pfetsch) in "
+                        + o.elapsed().toMillis() + " ms"
+                : found + " found; no matching has fewer than " + o.lowerBound() + " critical cells (time limit "
+                        + "reached after " + o.elapsed().toMillis() + " ms)";
     }
 
     private static String pad(String s, int width, boolean right) {

@@ -65,7 +65,7 @@ class SvgPicturesTest {
         ComparisonReport report = new ComparisonReport("rp2.simplicial", InputFormat.SIMPLICIAL, ComplexKind.SIMPLICIAL,
                 List.of(6L, 15L, 10L), Optional.empty(), rp2, false, "coreduction", List.of(), List.of(
                         new MatchingRun("coreduction", List.of(1, 1, 1), List.of(), -1, List.of()),
-                        new MatchingRun("none", List.of(6, 15, 10), List.of(), -1, List.of())), 1L);
+                        new MatchingRun("none", List.of(6, 15, 10), List.of(), -1, List.of())), 1L, Optional.empty());
         Document doc = parse(ComparisonChartSvg.toSvg(report));
         assertEquals(6, count(doc, "rect", "bar"));
         assertEquals(3, count(doc, "line", "bound"));

@@ -100,7 +100,7 @@ final class OptionConverters {
     /** The names shown for {@code --matching}. */
     static final class MatchingNames extends Names {
         MatchingNames() {
-            super(() -> MatchingHeuristics.names().stream());
+            super(() -> MatchingHeuristics.everyKnown().keySet().stream());
         }
     }
 

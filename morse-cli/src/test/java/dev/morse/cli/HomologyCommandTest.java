@@ -260,7 +260,8 @@ class HomologyCommandTest {
         assertEquals(2, run.code());
         assertEquals("", run.out());
         assertTrue(run.errLines().get(0).contains(
-                "unknown matching 'steepest'; available: coreduction, collapse, lexicographic, random, none"), run.err());
+                "unknown matching 'steepest'; available: coreduction, collapse, lexicographic, random, none, last-free-face,"
+                + " freeing-collapse, optimal"), run.err());
         assertTrue(run.errLines().size() <= 2, run.err());
     }
 

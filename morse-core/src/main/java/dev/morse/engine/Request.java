@@ -81,7 +81,7 @@ public record Request(ComplexChoice complex, Coefficients coefficients, boolean 
     public static String requireKnownMatching(String name) {
         if (name == null || MatchingHeuristics.byName(name).isEmpty()) {
             throw new IllegalArgumentException("unknown matching '" + name + "'; available: "
-                    + String.join(", ", MatchingHeuristics.names()));
+                    + String.join(", ", MatchingHeuristics.everyKnown().keySet()));
         }
         return name;
     }

@@ -14,12 +14,13 @@ import java.math.BigInteger;
  * Trans. AMS 2006; Forman 1998, the flow Φ^∞). A face τ matched upward with ν is cancelled by adding
  * {@code -a/[ν:τ] ν}, the faces taken in a topological order of the gradient flow so that each is
  * settled once. Since g is a chain map, a cycle of the Morse complex lifts to a cycle. Exact
- * BigInteger coefficients.
+ * BigInteger coefficients. Keeps the flow order of each dimension once computed; not thread-safe.
  */
 final class FlowLift {
     private final ChainComplex complex;
     private final Matching matching;
     private final Boundary boundary;
+    private final java.util.Map<Integer, int[]> orders = new java.util.HashMap<>();
 
     FlowLift(ChainComplex complex, Matching matching) {
         this.complex = complex;
@@ -37,7 +38,7 @@ final class FlowLift {
         for (var e : chain.int2ObjectEntrySet()) {
             addBoundary(faces, e.getIntKey(), e.getValue());
         }
-        for (int tau : flowOrder(d - 1)) {
+        for (int tau : orders.computeIfAbsent(d - 1, this::flowOrder)) {
             BigInteger a = faces.get(tau);
             if (a == null || a.signum() == 0) {
                 continue;

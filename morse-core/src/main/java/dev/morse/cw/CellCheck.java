@@ -61,6 +61,9 @@ final class CellCheck {
         this.owner = new int[poset.size()];
         this.local = new int[poset.size()];
         Arrays.fill(owner, -1);
+        // marks hold element ids, so a fresh array must not claim to belong to element 0
+        Arrays.fill(middleMark, -1);
+        Arrays.fill(signMark, -1);
     }
 
     /** Why the poset is not graded (every cover raising the height by one), or null. */

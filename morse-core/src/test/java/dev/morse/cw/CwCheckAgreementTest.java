@@ -125,6 +125,40 @@ class CwCheckAgreementTest {
         }
     }
 
+    @Test
+    void randomPosetsWithElementsNumberedInRandomOrder() {
+        // element 0 may sit anywhere, also above others: scratch marks must not mistake it for a visited one
+        assertAgrees(Fixtures.poset("a\nb: a\nc\nd\ne: c d\na: e\n"), "element 0 at height 2");
+        SplittableRandom random = new SplittableRandom(5);
+        List<Poset> bases = List.of(Fixtures.cubeBoundary(3), Fixtures.booleanProperPart(4), Fixtures.cubicalGrid(1, 3));
+        for (int trial = 0; trial < 200; trial++) {
+            Poset base = trial % 2 == 0 ? bases.get(trial / 2 % bases.size())
+                    : Fixtures.randomPoset(new Random(trial), 4 + random.nextInt(12), 0.3);
+            assertAgrees(renumbered(glued(base, random, random.nextInt(2)), random), "renumbered " + trial);
+        }
+    }
+
+    /** The same poset with ids given in a random order. */
+    private static Poset renumbered(Poset p, SplittableRandom random) {
+        int n = p.size();
+        int[] order = new int[n];
+        for (int i = 0; i < n; i++) {
+            int j = random.nextInt(i + 1);
+            order[i] = order[j];
+            order[j] = i;
+        }
+        PosetBuilder b = new PosetBuilder();
+        for (int x : order) {
+            b.element(p.label(x));
+        }
+        for (int x = 0; x < n; x++) {
+            for (int y : p.lowerCovers().neighbours(x)) {
+                b.relate(b.element(p.label(y)), b.element(p.label(x)), 0);
+            }
+        }
+        return Fixtures.build(b);
+    }
+
     /**
      * {@code base} with {@code extra} new elements, each covering a few random elements of one
      * random height, and now and then one cover of the base left out.

@@ -1,0 +1,326 @@
+package dev.morse.io;
+
+import dev.morse.poset.ElementLabels;
+import dev.morse.poset.OrderCycleException;
+import dev.morse.poset.Poset;
+import dev.morse.poset.PosetBuilder;
+import dev.morse.progress.Progress;
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+
+/**
+ * Reads a {@code morse-poset 1} file as bytes: no string or other object per line or per label.
+ * Labels are interned as byte slices in an open-addressing table of ints over one byte arena, and
+ * the relations go into two int arrays; ids are given in order of first appearance, exactly as the
+ * text reader gives them.
+ *
+ * <p>It reads only what it can read exactly like the text reader: pure ASCII input in which
+ * nothing is wrong. At the first non-ASCII byte, the first problem of any kind, or a cycle, it
+ * gives up and returns nothing, and the caller reads the file again with the text reader, which
+ * then gives the same poset or the same one-line error as ever, with its line number. So errors
+ * cost a second reading, and correct files never do.
+ *
+ * <p>Memory: the label bytes, 4 bytes per label for its offset and 16 to 32 for the table (8-byte
+ * slots holding hash and id, at most half full), 8 bytes per listed relation, plus a buffer of {@value #BUFFER} bytes.
+ */
+final class PosetFileParser {
+    static final int BUFFER = 1 << 20;
+    private static final byte[] HEADER_KIND = PosetReader.KIND.getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+    private static final byte[] HEADER_VERSION = PosetReader.VERSION.getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+
+    private byte[] arena = new byte[1 << 16];
+    private int arenaSize;
+    private int[] starts = new int[1 << 10];
+    private int count;
+    /** Slots: the label's hash in the high half, its id + 1 in the low half; 0 when empty. */
+    private long[] table = new long[1 << 11];
+    private int[] lowers = new int[1 << 12];
+    private int[] uppers = new int[1 << 12];
+    private int relations;
+    private boolean headerSeen;
+    private int lineNumber;
+    private final Progress progress = Progress.current();
+
+    /** Signals that the text reader must decide; carries no message, since it never reaches users. */
+    private static final class GiveUp extends Exception {
+        private static final long serialVersionUID = 1L;
+
+        GiveUp() {
+            super(null, null, false, false);
+        }
+    }
+
+    private static final GiveUp GIVE_UP = new GiveUp();
+
+    private PosetFileParser() {
+    }
+
+    /** The poset in {@code file}, or null if the text reader must read it. */
+    static Poset read(Path file) throws IOException {
+        PosetFileParser parser = new PosetFileParser();
+        Progress progress = parser.progress;
+        progress.begin("read", "lines", 0);
+        try (InputStream in = Files.newInputStream(file)) {
+            parser.parse(in);
+        } catch (GiveUp e) {
+            return null;
+        }
+        progress.begin("hasse diagram", "elements", parser.count);
+        return parser.build();
+    }
+
+    private Poset build() {
+        starts[count] = arenaSize;
+        ElementLabels labels = ElementLabels.ofAsciiArena(arena, starts, count);
+        arena = null;
+        starts = null;
+        table = null;
+        int[] lo = lowers;
+        int[] up = uppers;
+        lowers = null;
+        uppers = null;
+        try {
+            return PosetBuilder.fromRelations(labels, lo, up, relations);
+        } catch (OrderCycleException e) {
+            return null;
+        }
+    }
+
+    private void parse(InputStream in) throws IOException, GiveUp {
+        byte[] buffer = new byte[BUFFER];
+        int filled = 0;
+        while (true) {
+            int read = in.read(buffer, filled, buffer.length - filled);
+            boolean end = read < 0;
+            if (!end) {
+                filled += read;
+                if (filled < buffer.length) {
+                    continue;
+                }
+            }
+            int consumed = lines(buffer, filled, end);
+            if (end) {
+                break;
+            }
+            if (consumed == 0) {
+                // one line longer than the buffer: make room
+                buffer = Arrays.copyOf(buffer, 2 * buffer.length);
+            } else {
+                System.arraycopy(buffer, consumed, buffer, 0, filled - consumed);
+                filled -= consumed;
+            }
+        }
+        if (!headerSeen) {
+            throw GIVE_UP;
+        }
+    }
+
+    /**
+     * Handles the complete lines in {@code b[0..filled)} and returns where the first incomplete one
+     * starts; at the end of the input the last line is complete without a terminator. Lines end as
+     * {@link java.io.BufferedReader#readLine()} ends them: at \n, \r or \r\n.
+     */
+    private int lines(byte[] b, int filled, boolean end) throws GiveUp {
+        int s = 0;
+        while (s < filled) {
+            int e = s;
+            int comment = -1;
+            while (e < filled) {
+                byte c = b[e];
+                if (c == '\n' || c == '\r') {
+                    break;
+                }
+                if (c < 0) {
+                    throw GIVE_UP;
+                }
+                if (c == '#' && comment < 0) {
+                    comment = e;
+                }
+                e++;
+            }
+            int next;
+            if (e == filled) {
+                if (!end) {
+                    return s;
+                }
+                next = filled;
+            } else if (b[e] == '\r') {
+                if (e + 1 == filled && !end) {
+                    return s; // a \n may follow in the next read
+                }
+                next = e + 1 < filled && b[e + 1] == '\n' ? e + 2 : e + 1;
+            } else {
+                next = e + 1;
+            }
+            lineNumber++;
+            line(b, s, comment >= 0 ? comment : e);
+            if ((lineNumber & PosetReader.REPORT_EVERY) == 0) {
+                progress.reached(lineNumber);
+            }
+            s = next;
+        }
+        return s;
+    }
+
+    /** ASCII white space in the sense of {@link Character#isWhitespace}, as the text reader splits. */
+    private static boolean space(byte c) {
+        return c == ' ' || (c >= 9 && c <= 13) || (c >= 28 && c <= 31);
+    }
+
+    private void line(byte[] b, int s, int e) throws GiveUp {
+        while (s < e && space(b[s])) {
+            s++;
+        }
+        while (e > s && space(b[e - 1])) {
+            e--;
+        }
+        if (s == e) {
+            return;
+        }
+        if (!headerSeen) {
+            header(b, s, e);
+            return;
+        }
+        int colon = s;
+        while (colon < e && b[colon] != ':') {
+            colon++;
+        }
+        int headEnd = colon;
+        while (headEnd > s && space(b[headEnd - 1])) {
+            headEnd--;
+        }
+        if (headEnd == s) {
+            throw GIVE_UP;
+        }
+        for (int i = s; i < headEnd; i++) {
+            if (space(b[i])) {
+                throw GIVE_UP;
+            }
+        }
+        int upper = intern(b, s, headEnd);
+        int i = colon + 1;
+        while (i < e) {
+            while (i < e && space(b[i])) {
+                i++;
+            }
+            int w = i;
+            while (i < e && !space(b[i])) {
+                if (b[i] == ':') {
+                    throw GIVE_UP;
+                }
+                i++;
+            }
+            if (i > w) {
+                if (i - w == headEnd - s && Arrays.equals(b, w, i, b, s, headEnd)) {
+                    throw GIVE_UP;
+                }
+                relate(intern(b, w, i), upper);
+            }
+        }
+    }
+
+    private void header(byte[] b, int s, int e) throws GiveUp {
+        int k = s;
+        while (k < e && !space(b[k])) {
+            k++;
+        }
+        int v = k;
+        while (v < e && space(b[v])) {
+            v++;
+        }
+        if (!Arrays.equals(b, s, k, HEADER_KIND, 0, HEADER_KIND.length)
+                || !Arrays.equals(b, v, e, HEADER_VERSION, 0, HEADER_VERSION.length)) {
+            throw GIVE_UP;
+        }
+        headerSeen = true;
+    }
+
+    private void relate(int lower, int upper) {
+        if (relations == lowers.length) {
+            int length = lowers.length + (lowers.length >> 1);
+            lowers = Arrays.copyOf(lowers, length);
+            uppers = Arrays.copyOf(uppers, length);
+        }
+        lowers[relations] = lower;
+        uppers[relations] = upper;
+        relations++;
+    }
+
+    /** The id of the label {@code b[s..e)}, a new one if it was not seen before. */
+    private int intern(byte[] b, int s, int e) {
+        int h = 0;
+        for (int i = s; i < e; i++) {
+            h = 31 * h + b[i];
+        }
+        // the finaliser of MurmurHash3: labels differing in one digit must not cluster under linear probing
+        h ^= h >>> 16;
+        h *= 0x85EBCA6B;
+        h ^= h >>> 13;
+        h *= 0xC2B2AE35;
+        h ^= h >>> 16;
+        int mask = table.length - 1;
+        for (int slot = h & mask; ; slot = (slot + 1) & mask) {
+            long entry = table[slot];
+            if (entry == 0) {
+                int id = add(b, s, e, h);
+                table[slot] = ((long) h << 32) | (id + 1);
+                if (2 * count > table.length) {
+                    rehash();
+                }
+                return id;
+            }
+            int id = (int) entry - 1;
+            if ((int) (entry >>> 32) == h && sameBytes(b, s, e, id)) {
+                return id;
+            }
+        }
+    }
+
+    private boolean sameBytes(byte[] b, int s, int e, int id) {
+        int start = starts[id];
+        int end = id + 1 < count ? starts[id + 1] : arenaSize;
+        if (end - start != e - s) {
+            return false;
+        }
+        // labels are short: a plain loop beats the vectorised comparison's set-up cost
+        for (int i = start, j = s; i < end; i++, j++) {
+            if (arena[i] != b[j]) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private int add(byte[] b, int s, int e, int h) {
+        int length = e - s;
+        if (arenaSize + length > arena.length) {
+            arena = Arrays.copyOf(arena, Math.max(arenaSize + length, arena.length + (arena.length >> 1)));
+        }
+        System.arraycopy(b, s, arena, arenaSize, length);
+        if (count + 1 >= starts.length) {
+            int grown = starts.length + (starts.length >> 1);
+            starts = Arrays.copyOf(starts, grown);
+        }
+        starts[count] = arenaSize;
+        arenaSize += length;
+        return count++;
+    }
+
+    private void rehash() {
+        long[] bigger = new long[table.length * 2];
+        int mask = bigger.length - 1;
+        for (long entry : table) {
+            if (entry != 0) {
+                int slot = (int) (entry >>> 32) & mask;
+                while (bigger[slot] != 0) {
+                    slot = (slot + 1) & mask;
+                }
+                bigger[slot] = entry;
+            }
+        }
+        table = bigger;
+    }
+}

@@ -103,9 +103,12 @@ public final class CwPosetCheck {
             int from = levelStart;
             int to = levelEnd[h];
             levelStart = to;
-            int workers = (int) Math.min(checks.length, (to - from + CHUNK - 1) / CHUNK);
-            failure = workers <= 1 ? sequentialFailure(poset, signs, checks, order, from, to, progress)
-                    : parallelFailure(poset, signs, checks, order, from, to, workers);
+            // lower sets grow with the height, so a few high cells may be worth sharing out
+            int chunk = Math.max(1, Math.min(MAX_CHUNK, (to - from) / (4 * checks.length)));
+            boolean worthSharing = h >= 3 ? to - from >= 2 : to - from >= 2 * MAX_CHUNK;
+            failure = checks.length == 1 || !worthSharing
+                    ? sequentialFailure(poset, signs, checks, order, from, to, progress)
+                    : parallelFailure(poset, signs, checks, order, from, to, checks.length, chunk);
             if (failure != null) {
                 return CwStructure.failed(failure);
             }
@@ -114,8 +117,8 @@ public final class CwPosetCheck {
         return CwStructure.passed(signs);
     }
 
-    /** Elements handed to a worker at a time. */
-    private static final int CHUNK = 512;
+    /** Most elements handed to a worker at a time. */
+    private static final int MAX_CHUNK = 512;
 
     private static String sequentialFailure(Poset poset, byte[] signs, CellCheck[] checks, int[] order,
             int from, int to, Progress progress) {
@@ -133,16 +136,16 @@ public final class CwPosetCheck {
     }
 
     private static String parallelFailure(Poset poset, byte[] signs, CellCheck[] checks, int[] order,
-            int from, int to, int workers) {
+            int from, int to, int workers, int chunk) {
         AtomicInteger nextChunk = new AtomicInteger(from);
         AtomicInteger firstFailed = new AtomicInteger(Integer.MAX_VALUE);
         String[] reasons = new String[workers];
         int[] failedAt = new int[workers];
         Arrays.fill(failedAt, Integer.MAX_VALUE);
-        Workers.each(workers, w -> {
+        Workers.share(workers, w -> {
             CellCheck check = checks[w] != null ? checks[w] : (checks[w] = new CellCheck(poset, signs));
-            for (int start = nextChunk.getAndAdd(CHUNK); start < to; start = nextChunk.getAndAdd(CHUNK)) {
-                int end = Math.min(to, start + CHUNK);
+            for (int start = nextChunk.getAndAdd(chunk); start < to; start = nextChunk.getAndAdd(chunk)) {
+                int end = Math.min(to, start + chunk);
                 for (int k = start; k < end && k < firstFailed.get(); k++) {
                     String failure = check.failure(order[k]);
                     if (failure != null) {

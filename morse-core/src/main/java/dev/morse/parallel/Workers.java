@@ -4,6 +4,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicIntegerArray;
 import java.util.function.IntConsumer;
 
 /**
@@ -40,19 +41,29 @@ public final class Workers {
     }
 
     /**
-     * Runs {@code body.accept(w)} for every worker {@code w} in {@code 0..workers-1} at once and
-     * returns when all have finished. The first failure of any worker is rethrown here, after all
-     * have stopped; everything the workers wrote is visible to the caller afterwards.
+     * Runs {@code body.accept(w)} for workers {@code w} in {@code 0..workers-1} at once and returns
+     * when all that started have finished. Worker 0 runs on the calling thread; a worker whose
+     * thread has not started by the time worker 0 is done is not run at all, so that a busy machine
+     * never makes the caller wait for a thread only to find the work gone. Bodies must therefore
+     * share their work through a common counter rather than split it in advance. The first failure
+     * of any worker is rethrown here after all have stopped; everything the workers wrote is
+     * visible to the caller afterwards.
      */
-    public static void each(int workers, IntConsumer body) {
+    public static void share(int workers, IntConsumer body) {
         if (workers <= 1) {
             body.accept(0);
             return;
         }
         Future<?>[] others = new Future<?>[workers - 1];
+        // per worker: 0 while waiting for a thread, 1 once started, 2 once given up by the caller
+        AtomicIntegerArray state = new AtomicIntegerArray(workers);
         for (int w = 1; w < workers; w++) {
             int worker = w;
-            others[w - 1] = POOL.submit(() -> body.accept(worker));
+            others[w - 1] = POOL.submit(() -> {
+                if (state.compareAndSet(worker, 0, 1)) {
+                    body.accept(worker);
+                }
+            });
         }
         Throwable failure = null;
         try {
@@ -60,9 +71,12 @@ public final class Workers {
         } catch (RuntimeException | Error e) {
             failure = e;
         }
-        for (Future<?> other : others) {
+        for (int w = 1; w < workers; w++) {
+            if (state.compareAndSet(w, 0, 2)) {
+                continue; // never started, and now never will: its share was done by the others
+            }
             try {
-                other.get();
+                others[w - 1].get();
             } catch (ExecutionException e) {
                 failure = failure != null ? failure : e.getCause();
             } catch (InterruptedException e) {

@@ -4,10 +4,16 @@ import dev.morse.poset.ElementLabels;
 import dev.morse.poset.OrderCycleException;
 import dev.morse.poset.Poset;
 import dev.morse.poset.PosetBuilder;
+import dev.morse.parallel.Workers;
 import dev.morse.progress.Progress;
 import java.io.IOException;
 import java.io.InputStream;
+import java.nio.ByteBuffer;
+import java.nio.channels.FileChannel;
 import java.nio.file.Files;
+import java.nio.file.StandardOpenOption;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicInteger;
 import java.nio.file.Path;
 import java.util.Arrays;
 
@@ -42,7 +48,7 @@ final class PosetFileParser {
     private int relations;
     private boolean headerSeen;
     private int lineNumber;
-    private final Progress progress = Progress.current();
+    private final Progress progress;
 
     /** Signals that the text reader must decide; carries no message, since it never reaches users. */
     private static final class GiveUp extends Exception {
@@ -55,33 +61,139 @@ final class PosetFileParser {
 
     private static final GiveUp GIVE_UP = new GiveUp();
 
-    private PosetFileParser() {
+    private PosetFileParser(Progress progress, boolean afterHeader) {
+        this.progress = progress;
+        this.headerSeen = afterHeader;
     }
 
     /** The poset in {@code file}, or null if the text reader must read it. */
     static Poset read(Path file) throws IOException {
-        PosetFileParser parser = new PosetFileParser();
-        Progress progress = parser.progress;
+        Progress progress = Progress.current();
         progress.begin("read", "lines", 0);
-        try (InputStream in = Files.newInputStream(file)) {
-            parser.parse(in);
-        } catch (GiveUp e) {
+        long size = Files.size(file);
+        int regions = size >= PARALLEL_FROM ? Workers.threads() : 1;
+        PosetFileParser[] parsers;
+        try (FileChannel channel = FileChannel.open(file, StandardOpenOption.READ)) {
+            parsers = parseRegions(channel, size, regions, progress);
+        }
+        if (parsers == null) {
             return null;
         }
-        progress.begin("hasse diagram", "elements", parser.count);
-        return parser.build();
+        PosetFileParser first = parsers[0];
+        int labelCount = 0;
+        for (PosetFileParser parser : parsers) {
+            labelCount += parser.count;
+        }
+        progress.begin("hasse diagram", "elements", labelCount);
+        if (parsers.length == 1) {
+            first.starts[first.count] = first.arenaSize;
+            return build(ElementLabels.ofAsciiArena(first.arena, first.starts, first.count), first.lowers,
+                    first.uppers, first.relations);
+        }
+        RegionMerge merged = RegionMerge.of(parsers);
+        return build(merged.labels(), merged.lowers(), merged.uppers(), merged.relations());
     }
 
-    private Poset build() {
-        starts[count] = arenaSize;
-        ElementLabels labels = ElementLabels.ofAsciiArena(arena, starts, count);
-        arena = null;
-        starts = null;
-        table = null;
-        int[] lo = lowers;
-        int[] up = uppers;
-        lowers = null;
-        uppers = null;
+    /** Files smaller than this are read by one thread: splitting would cost more than it saves. */
+    static final long PARALLEL_FROM = 4L << 20;
+
+    /**
+     * Parses {@code regions} stretches of the file, each starting at a line start, on all workers;
+     * null if any gave up. Only the first stretch expects the header, and only it reports progress.
+     */
+    private static PosetFileParser[] parseRegions(FileChannel channel, long size, int regions, Progress progress)
+            throws IOException {
+        long[] bounds = lineStarts(channel, size, regions);
+        PosetFileParser[] parsers = new PosetFileParser[regions];
+        for (int r = 0; r < regions; r++) {
+            parsers[r] = new PosetFileParser(r == 0 ? progress : Progress.SILENT, r > 0);
+        }
+        AtomicInteger next = new AtomicInteger();
+        AtomicBoolean gaveUp = new AtomicBoolean();
+        IOException[] failure = new IOException[1];
+        Workers.share(Math.min(regions, Workers.threads()), w -> {
+            for (int r = next.getAndIncrement(); r < regions && !gaveUp.get(); r = next.getAndIncrement()) {
+                try {
+                    parsers[r].parse(new RegionStream(channel, bounds[r], bounds[r + 1]));
+                } catch (GiveUp e) {
+                    gaveUp.set(true);
+                } catch (IOException e) {
+                    synchronized (failure) {
+                        failure[0] = failure[0] != null ? failure[0] : e;
+                    }
+                    gaveUp.set(true);
+                }
+            }
+        });
+        if (failure[0] != null) {
+            throw failure[0];
+        }
+        return gaveUp.get() ? null : parsers;
+    }
+
+    /**
+     * Region boundaries near equal shares of the file: each just after a \n, which ends a line
+     * whichever of \n and \r\n ends it; a share with no \n in it is left empty.
+     */
+    private static long[] lineStarts(FileChannel channel, long size, int regions) throws IOException {
+        long[] bounds = new long[regions + 1];
+        bounds[regions] = size;
+        ByteBuffer probe = ByteBuffer.allocate(1 << 12);
+        for (int r = 1; r < regions; r++) {
+            long at = Math.max(bounds[r - 1], size * r / regions);
+            long found = size;
+            while (at < size && found == size) {
+                probe.clear();
+                int read = channel.read(probe, at);
+                if (read <= 0) {
+                    break;
+                }
+                for (int i = 0; i < read; i++) {
+                    if (probe.get(i) == '\n') {
+                        found = at + i + 1;
+                        break;
+                    }
+                }
+                at += read;
+            }
+            bounds[r] = found;
+        }
+        return bounds;
+    }
+
+    /** The bytes of {@code [from, to)} of a channel, read at explicit positions so that threads can share it. */
+    private static final class RegionStream extends InputStream {
+        private final FileChannel channel;
+        private long position;
+        private final long end;
+
+        RegionStream(FileChannel channel, long from, long to) {
+            this.channel = channel;
+            this.position = from;
+            this.end = to;
+        }
+
+        @Override
+        public int read() throws IOException {
+            byte[] one = new byte[1];
+            return read(one, 0, 1) < 0 ? -1 : one[0] & 0xFF;
+        }
+
+        @Override
+        public int read(byte[] b, int off, int len) throws IOException {
+            if (position >= end) {
+                return -1;
+            }
+            int want = (int) Math.min(len, end - position);
+            int got = channel.read(ByteBuffer.wrap(b, off, want), position);
+            if (got > 0) {
+                position += got;
+            }
+            return got;
+        }
+    }
+
+    private static Poset build(ElementLabels labels, int[] lo, int[] up, int relations) {
         try {
             return PosetBuilder.fromRelations(labels, lo, up, relations);
         } catch (OrderCycleException e) {
@@ -251,16 +363,7 @@ final class PosetFileParser {
 
     /** The id of the label {@code b[s..e)}, a new one if it was not seen before. */
     private int intern(byte[] b, int s, int e) {
-        int h = 0;
-        for (int i = s; i < e; i++) {
-            h = 31 * h + b[i];
-        }
-        // the finaliser of MurmurHash3: labels differing in one digit must not cluster under linear probing
-        h ^= h >>> 16;
-        h *= 0x85EBCA6B;
-        h ^= h >>> 13;
-        h *= 0xC2B2AE35;
-        h ^= h >>> 16;
+        int h = hash(b, s, e);
         int mask = table.length - 1;
         for (int slot = h & mask; ; slot = (slot + 1) & mask) {
             long entry = table[slot];
@@ -277,6 +380,54 @@ final class PosetFileParser {
                 return id;
             }
         }
+    }
+
+    /**
+     * The hash of the label {@code b[s..e)}: a polynomial in its bytes, then the finaliser of
+     * MurmurHash3, so that labels differing in one digit do not cluster under linear probing.
+     */
+    static int hash(byte[] b, int s, int e) {
+        int h = 0;
+        for (int i = s; i < e; i++) {
+            h = 31 * h + b[i];
+        }
+        h ^= h >>> 16;
+        h *= 0x85EBCA6B;
+        h ^= h >>> 13;
+        h *= 0xC2B2AE35;
+        h ^= h >>> 16;
+        return h;
+    }
+
+    /** Number of labels of this region, in order of first appearance in it. */
+    int labelCount() {
+        return count;
+    }
+
+    /** The label bytes of this region; label {@code l} is {@code labelStart(l) .. labelEnd(l)}. */
+    byte[] arena() {
+        return arena;
+    }
+
+    int labelStart(int l) {
+        return starts[l];
+    }
+
+    int labelEnd(int l) {
+        return l + 1 < count ? starts[l + 1] : arenaSize;
+    }
+
+    /** Relations of this region in local label ids: {@code lowers()[i] < uppers()[i]} for {@code i < relationCount()}. */
+    int[] lowers() {
+        return lowers;
+    }
+
+    int[] uppers() {
+        return uppers;
+    }
+
+    int relationCount() {
+        return relations;
     }
 
     private boolean sameBytes(byte[] b, int s, int e, int id) {

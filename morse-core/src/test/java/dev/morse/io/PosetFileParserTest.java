@@ -120,6 +120,41 @@ class PosetFileParserTest {
     }
 
     @Test
+    void filesSplitAmongThreadsReadAsOneReaderReadsThem() throws IOException {
+        // labels named again and again across the stretches that different threads parse
+        SplittableRandom random = new SplittableRandom(31);
+        String[] endings = {"\n", "\r\n", "\r"};
+        for (int trial = 0; trial < 3; trial++) {
+            StringBuilder text = new StringBuilder("# several threads\nmorse-poset 1\n");
+            int k = 0;
+            while (text.length() < PosetFileParser.PARALLEL_FROM + (trial + 1) * 1_500_000L) {
+                text.append('n').append(k);
+                if (k > 0) {
+                    text.append(':');
+                    for (int j = random.nextInt(4); j >= 0; j--) {
+                        text.append(" n").append(random.nextInt(k));
+                    }
+                }
+                text.append(endings[trial == 2 ? 2 : random.nextInt(2)]);
+                k++;
+            }
+            for (String threads : new String[] {"2", "3", "5"}) {
+                String before = System.getProperty("morse.threads");
+                System.setProperty("morse.threads", threads);
+                try {
+                    assertReadsAsText(text.toString(), 30_000 + 10 * trial + threads.charAt(0) - '0');
+                } finally {
+                    if (before == null) {
+                        System.clearProperty("morse.threads");
+                    } else {
+                        System.setProperty("morse.threads", before);
+                    }
+                }
+            }
+        }
+    }
+
+    @Test
     void theByteReaderLeavesErrorsAndNonAsciiToTheTextReader() throws IOException {
         Path cycle = dir.resolve("cycle.poset");
         Files.writeString(cycle, "morse-poset 1\na: b\nb: a\n");

@@ -19,7 +19,7 @@ import java.util.Arrays;
 
 /**
  * Reads a {@code morse-poset 1} file as bytes: no string or other object per line or per label.
- * Labels are interned as byte slices in an open-addressing table over one byte arena, and
+ * Labels are interned as byte slices in an open-addressing table of ints over one byte arena, and
  * the relations go into two int arrays; ids are given in order of first appearance, exactly as the
  * text reader gives them.
  *
@@ -29,9 +29,8 @@ import java.util.Arrays;
  * then gives the same poset or the same one-line error as ever, with its line number. So errors
  * cost a second reading, and correct files never do.
  *
- * <p>Memory: the label bytes, 4 bytes per label for its offset and 32 to 64 for the table (24-byte
- * slots holding hash, id and a short label's bytes, at most three quarters full), 8 bytes per
- * listed relation, plus a buffer of {@value #BUFFER} bytes.
+ * <p>Memory: the label bytes, 4 bytes per label for its offset and 16 to 32 for the table (8-byte
+ * slots holding hash and id, at most half full), 8 bytes per listed relation, plus a buffer of {@value #BUFFER} bytes.
  */
 final class PosetFileParser {
     static final int BUFFER = 1 << 20;
@@ -43,7 +42,7 @@ final class PosetFileParser {
     private int[] starts = new int[1 << 10];
     private int count;
     /** Slots: the label's hash in the high half, its id + 1 in the low half; 0 when empty. */
-    private long[] table = new long[SLOT << 11];
+    private long[] table = new long[1 << 11];
     private int[] lowers = new int[1 << 12];
     private int[] uppers = new int[1 << 12];
     private int relations;
@@ -362,55 +361,26 @@ final class PosetFileParser {
         relations++;
     }
 
-    /**
-     * The id of the label {@code b[s..e)}, a new one if it was not seen before. A label of at most
-     * {@value #INLINE} bytes is compared by the two words its slot holds, in the cache line the probe
-     * has already loaded, never by its bytes in the arena.
-     */
+    /** The id of the label {@code b[s..e)}, a new one if it was not seen before. */
     private int intern(byte[] b, int s, int e) {
         int h = hash(b, s, e);
-        int length = e - s;
-        long first = 0;
-        long second = 0;
-        if (length <= INLINE) {
-            for (int i = 0; i < length; i++) {
-                if (i < 8) {
-                    first |= (b[s + i] & 0xFFL) << (8 * i);
-                } else {
-                    second |= (b[s + i] & 0xFFL) << (8 * (i - 8));
-                }
-            }
-            second |= (long) length << 56;
-        } else {
-            second = LONG_LABEL;
-        }
-        int mask = table.length / SLOT - 1;
+        int mask = table.length - 1;
         for (int slot = h & mask; ; slot = (slot + 1) & mask) {
-            int at = slot * SLOT;
-            long entry = table[at];
+            long entry = table[slot];
             if (entry == 0) {
-                int id = add(b, s, e);
-                table[at] = ((long) h << 32) | (id + 1);
-                table[at + 1] = first;
-                table[at + 2] = second;
-                if (4 * count > 3 * (table.length / SLOT)) {
+                int id = add(b, s, e, h);
+                table[slot] = ((long) h << 32) | (id + 1);
+                if (2 * count > table.length) {
                     rehash();
                 }
                 return id;
             }
-            if ((int) (entry >>> 32) == h && table[at + 1] == first && table[at + 2] == second
-                    && (second != LONG_LABEL || sameBytes(b, s, e, (int) entry - 1))) {
-                return (int) entry - 1;
+            int id = (int) entry - 1;
+            if ((int) (entry >>> 32) == h && sameBytes(b, s, e, id)) {
+                return id;
             }
         }
     }
-
-    /** Longs per slot of the table: hash and id, then up to {@value #INLINE} label bytes and the length. */
-    private static final int SLOT = 3;
-    /** The longest label held in its slot. */
-    private static final int INLINE = 15;
-    /** The third word of a label too long to be held in its slot (no inline length is 255). */
-    private static final long LONG_LABEL = 0xFFL << 56;
 
     /**
      * The hash of the label {@code b[s..e)}: a polynomial in its bytes, then the finaliser of
@@ -475,7 +445,7 @@ final class PosetFileParser {
         return true;
     }
 
-    private int add(byte[] b, int s, int e) {
+    private int add(byte[] b, int s, int e, int h) {
         int length = e - s;
         if (arenaSize + length > arena.length) {
             arena = Arrays.copyOf(arena, Math.max(arenaSize + length, arena.length + (arena.length >> 1)));
@@ -492,15 +462,14 @@ final class PosetFileParser {
 
     private void rehash() {
         long[] bigger = new long[table.length * 2];
-        int mask = bigger.length / SLOT - 1;
-        for (int at = 0; at < table.length; at += SLOT) {
-            long entry = table[at];
+        int mask = bigger.length - 1;
+        for (long entry : table) {
             if (entry != 0) {
                 int slot = (int) (entry >>> 32) & mask;
-                while (bigger[slot * SLOT] != 0) {
+                while (bigger[slot] != 0) {
                     slot = (slot + 1) & mask;
                 }
-                System.arraycopy(table, at, bigger, slot * SLOT, SLOT);
+                bigger[slot] = entry;
             }
         }
         table = bigger;

@@ -35,6 +35,7 @@ final class CellCheck {
     private final int[] owner;
     private final int[] local;
     private final CoreductionSphereTest sphereTest = new CoreductionSphereTest();
+    private final KnownSpheres knownSpheres = new KnownSpheres();
 
     // the lower set of the element being checked, by local number
     private int size;
@@ -214,23 +215,32 @@ final class CellCheck {
      * The cells below x must have the homology of the sphere of dimension h - 1. Coreduction on
      * their cellular complex settles the usual case in time linear in its size; whenever it leaves
      * more than the two critical cells of a perfect sphere the homology is computed in full, so the
-     * verdict is exactly the homology test, however good or bad the matching.
+     * verdict is exactly the homology test, however good or bad the matching. A lower set whose
+     * boundary lists equal, entry for entry, those of one proven before is the same complex and
+     * needs no second proof ({@link KnownSpheres}).
      */
     private String sphereFailure(int x) {
         int h = poset.height(x);
         int e = 0;
-        Arrays.fill(cofaceStart, 0, size + 2, 0);
         for (int c = 0; c < size; c++) {
             int y = cells[c];
-            dimension[c] = poset.height(y);
             faceStart[c] = e;
             for (int j = lower.start(y); j < lower.end(y); j++) {
-                int f = local[lower.target(j)];
-                faces[e++] = f;
-                cofaceStart[f + 2]++;
+                faces[e++] = local[lower.target(j)];
             }
         }
         faceStart[size] = e;
+        long shape = KnownSpheres.hash(size, h - 1, faceStart, faces);
+        if (knownSpheres.contains(shape, size, h - 1, faceStart, faces)) {
+            return null;
+        }
+        Arrays.fill(cofaceStart, 0, size + 2, 0);
+        for (int c = 0; c < size; c++) {
+            dimension[c] = poset.height(cells[c]);
+            for (int i = faceStart[c]; i < faceStart[c + 1]; i++) {
+                cofaceStart[faces[i] + 2]++;
+            }
+        }
         for (int c = 0; c < size; c++) {
             cofaceStart[c + 2] += cofaceStart[c + 1];
         }
@@ -240,6 +250,7 @@ final class CellCheck {
             }
         }
         if (sphereTest.perfectSphere(size, dimension, faceStart, faces, cofaceStart, cofaces, h - 1)) {
+            knownSpheres.add(shape, size, h - 1, faceStart, faces);
             return null;
         }
         return homologySphereFailure(x);

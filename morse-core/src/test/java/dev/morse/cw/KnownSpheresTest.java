@@ -9,7 +9,7 @@ class KnownSpheresTest {
     // the boundary of a triangle: vertices 0, 1, 2, edges 3 = {0, 1}, 4 = {1, 2}, 5 = {0, 2}: S^1
     private static final int[] TRIANGLE_STARTS = {0, 0, 0, 0, 2, 4, 6};
     private static final int[] TRIANGLE_FACES = {0, 1, 1, 2, 0, 2};
-    // three vertices and three edges of which two are parallel, plus a lone vertex: not S^1
+    // the same three vertices with two parallel edges 0-1 and an edge 0-2 hanging off: not S^1
     private static final int[] OTHER_FACES = {0, 1, 0, 1, 0, 2};
 
     @Test

@@ -91,6 +91,8 @@ final class PosetFileParser {
                     first.uppers, first.relations);
         }
         RegionMerge merged = RegionMerge.of(parsers);
+        // the regions gave up their arrays to the merge; drop the shells too before the diagram is built
+        Arrays.fill(parsers, null);
         return build(merged.labels(), merged.lowers(), merged.uppers(), merged.relations());
     }
 
@@ -115,6 +117,9 @@ final class PosetFileParser {
             for (int r = next.getAndIncrement(); r < regions && !gaveUp.get(); r = next.getAndIncrement()) {
                 try {
                     parsers[r].parse(new RegionStream(channel, bounds[r], bounds[r + 1]));
+                    if (regions > 1) {
+                        parsers[r].table = null; // the merge finds labels by their bytes, not by this table
+                    }
                 } catch (GiveUp e) {
                     gaveUp.set(true);
                 } catch (IOException e) {
@@ -428,6 +433,14 @@ final class PosetFileParser {
 
     int relationCount() {
         return relations;
+    }
+
+    /** Lets go of the labels and relations once a merge has taken what it needs. */
+    void release() {
+        arena = null;
+        starts = null;
+        lowers = null;
+        uppers = null;
     }
 
     private boolean sameBytes(byte[] b, int s, int e, int id) {

@@ -119,6 +119,9 @@ final class RegionMerge {
                 lowers[base + i] = local[lo[i]];
                 uppers[base + i] = local[up[i]];
             }
+            // other regions still read ids[r]; this region's bytes, relations and first appearances are done
+            region.release();
+            first[r] = null;
         });
         return new RegionMerge(ElementLabels.ofAsciiArena(arena, starts, labelCount), lowers, uppers);
     }

@@ -16,6 +16,8 @@ import java.nio.file.Path;
 /**
  * Reads the {@code morse-poset 1} format: a header line, then lines {@code LABEL} or
  * {@code LABEL: LOWER ...}, each LOWER being below LABEL. Streaming; relations need not be covers.
+ * Files are first read as bytes ({@link PosetFileParser}), and read as text only when that parser
+ * gives up (non-ASCII input or an error), so that every error message comes from one place.
  */
 public final class PosetReader {
     /** The header's first word. */
@@ -31,6 +33,11 @@ public final class PosetReader {
 
     /** Reads a poset file; the file name appears in error messages as given. */
     public static Poset read(Path file) throws IOException {
+        Poset parsed = PosetFileParser.read(file);
+        if (parsed != null) {
+            return parsed;
+        }
+        // not plain ASCII, or something is wrong: the text reader decides, and words any error
         try (BufferedReader reader = utf8(file)) {
             return read(reader, file.toString());
         }

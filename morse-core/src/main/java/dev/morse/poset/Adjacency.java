@@ -40,6 +40,11 @@ public final class Adjacency extends CompressedRows {
         return new Adjacency(offsets, targets);
     }
 
+    /** The targets array itself, for builders in this package that reuse it; never handed out. */
+    int[] targetArray() {
+        return targets;
+    }
+
     /** Number of vertices. */
     public int vertexCount() {
         return rowCount();

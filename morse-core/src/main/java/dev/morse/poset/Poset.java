@@ -9,17 +9,18 @@ import java.util.Optional;
  * covers in both directions as CSR arrays. Immutable.
  *
  * <p>Memory: about 8 bytes per element (offsets) plus 8 bytes per cover (both directions), plus
- * 8 bytes per element for heights and the linear extension, plus the label strings.
+ * 8 bytes per element for heights and the linear extension, plus the labels (strings, or for a
+ * poset read from a file its label bytes and 4 bytes per element: {@link ElementLabels}).
  */
 public final class Poset {
-    private final String[] labels;
+    private final ElementLabels labels;
     private final Adjacency lowerCovers;
     private final Adjacency upperCovers;
     private final int[] heights;
     private final int[] linearExtension;
     private volatile Object2IntOpenHashMap<String> index;
 
-    Poset(String[] labels, Adjacency lowerCovers, Adjacency upperCovers, int[] heights, int[] linearExtension) {
+    Poset(ElementLabels labels, Adjacency lowerCovers, Adjacency upperCovers, int[] heights, int[] linearExtension) {
         this.labels = labels;
         this.lowerCovers = lowerCovers;
         this.upperCovers = upperCovers;
@@ -29,7 +30,7 @@ public final class Poset {
 
     /** Number of elements. */
     public int size() {
-        return labels.length;
+        return labels.size();
     }
 
     /** Number of cover relations (edges of the Hasse diagram). */
@@ -39,17 +40,18 @@ public final class Poset {
 
     /** The label of element {@code x}. */
     public String label(int x) {
-        return labels[x];
+        return labels.get(x);
     }
 
     /** The element with this label, if any. */
     public Optional<Integer> find(String label) {
         Object2IntOpenHashMap<String> map = index;
         if (map == null) {
-            map = new Object2IntOpenHashMap<>(labels.length);
+            int n = labels.size();
+            map = new Object2IntOpenHashMap<>(n);
             map.defaultReturnValue(-1);
-            for (int i = 0; i < labels.length; i++) {
-                map.put(labels[i], i);
+            for (int i = 0; i < n; i++) {
+                map.put(labels.get(i), i);
             }
             index = map;
         }

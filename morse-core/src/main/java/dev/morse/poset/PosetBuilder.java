@@ -106,16 +106,62 @@ public final class PosetBuilder {
      * @throws OrderCycleException if the relations contain a directed cycle
      */
     public Poset build() throws OrderCycleException {
+        int[] cycle = new int[0];
+        try {
+            return assemble(ElementLabels.ofStrings(labels.toArray(new String[0])), lowers.elements(),
+                    uppers.elements(), lowers.size());
+        } catch (CycleFound e) {
+            cycle = e.cycle;
+        }
+        throw new OrderCycleException(cycle, tagOf(cycle[cycle.length - 1], cycle[0]));
+    }
+
+    /**
+     * Builds the poset that the relations {@code lowers[i] < uppers[i]}, {@code i < count}, generate
+     * on elements labelled by {@code labels}: the path of a reader that has interned its labels
+     * itself and keeps no line numbers. The arrays are only read.
+     *
+     * @throws OrderCycleException if the relations contain a directed cycle; its tag is 0
+     * @throws IllegalArgumentException if a relation names an unknown element or relates one to itself
+     */
+    public static Poset fromRelations(ElementLabels labels, int[] lowers, int[] uppers, int count)
+            throws OrderCycleException {
         int n = labels.size();
-        int m = lowers.size();
-        int[] lo = lowers.elements();
-        int[] up = uppers.elements();
+        for (int i = 0; i < count; i++) {
+            if (lowers[i] < 0 || uppers[i] < 0 || lowers[i] >= n || uppers[i] >= n) {
+                throw new IllegalArgumentException("unknown element id");
+            }
+            if (lowers[i] == uppers[i]) {
+                throw new IllegalArgumentException("an element cannot be below itself: " + labels.get(lowers[i]));
+            }
+        }
+        try {
+            return assemble(labels, lowers, uppers, count);
+        } catch (CycleFound e) {
+            throw new OrderCycleException(e.cycle, 0);
+        }
+    }
+
+    /** The cycle found while assembling, before it is matched to a tag. */
+    private static final class CycleFound extends Exception {
+        private static final long serialVersionUID = 1L;
+        private final transient int[] cycle;
+
+        CycleFound(int[] cycle) {
+            super(null, null, false, false);
+            this.cycle = cycle;
+        }
+    }
+
+    private static Poset assemble(ElementLabels labels, int[] lo, int[] up, int m) throws CycleFound {
+        int n = labels.size();
         // listed lower elements of each element, deduplicated
         Adjacency listedBelow = dedupe(Adjacency.fromEdges(n, up, lo, m));
         Adjacency listedAbove = listedBelow.transpose();
         int[] order = topologicalOrder(listedBelow, listedAbove);
+        listedAbove = null; // not needed any more: let it go before the reduction allocates
         if (order.length < n) {
-            throw findCycle(listedBelow, order);
+            throw new CycleFound(findCycle(listedBelow, order));
         }
         int[] heights = new int[n];
         for (int x : order) {
@@ -126,25 +172,27 @@ public final class PosetBuilder {
             heights[x] = h;
         }
         Adjacency covers = transitiveReduction(listedBelow, heights);
-        return new Poset(labels.toArray(new String[0]), covers, covers.transpose(), heights, order);
+        return new Poset(labels, covers, covers.transpose(), heights, order);
     }
 
+    /** Drops repeated targets in each row, reusing the arrays when there are none. */
     private static Adjacency dedupe(Adjacency a) {
         int n = a.vertexCount();
         int[] offsets = new int[n + 1];
-        IntArrayList targets = new IntArrayList(a.edgeCount());
+        int[] targets = a.targetArray();
+        int kept = 0;
         for (int x = 0; x < n; x++) {
             int previous = -1;
             for (int i = a.start(x); i < a.end(x); i++) {
-                int t = a.target(i);
+                int t = targets[i];
                 if (t != previous) {
-                    targets.add(t);
+                    targets[kept++] = t; // kept <= i: compacting in place never overwrites what is still to be read
                     previous = t;
                 }
             }
-            offsets[x + 1] = targets.size();
+            offsets[x + 1] = kept;
         }
-        return new Adjacency(offsets, targets.toIntArray());
+        return new Adjacency(offsets, kept == targets.length ? targets : Arrays.copyOf(targets, kept));
     }
 
     /** Kahn's algorithm from the minimal elements; shorter than n exactly when there is a cycle. */
@@ -176,7 +224,7 @@ public final class PosetBuilder {
      * left out too, so walking down through left-out elements must revisit one: that closes a cycle.
      * Iterative, so a cycle of any length is found without deep recursion.
      */
-    private OrderCycleException findCycle(Adjacency below, int[] partialOrder) {
+    private static int[] findCycle(Adjacency below, int[] partialOrder) {
         int n = below.vertexCount();
         boolean[] placed = new boolean[n];
         for (int x : partialOrder) {
@@ -207,7 +255,7 @@ public final class PosetBuilder {
         for (int i = 0; i < descending.length; i++) {
             cycle[i] = descending[descending.length - 1 - i];
         }
-        return new OrderCycleException(cycle, tagOf(cycle[cycle.length - 1], cycle[0]));
+        return cycle;
     }
 
     private int tagOf(int lower, int upper) {
@@ -222,7 +270,8 @@ public final class PosetBuilder {
     private static Adjacency transitiveReduction(Adjacency below, int[] heights) {
         int n = below.vertexCount();
         int[] offsets = new int[n + 1];
-        IntArrayList covers = new IntArrayList(below.edgeCount());
+        int[] covers = new int[below.edgeCount()];
+        int kept = 0;
         int[] stamp = new int[n];
         Arrays.fill(stamp, -1);
         IntArrayList stack = new IntArrayList();
@@ -246,12 +295,12 @@ public final class PosetBuilder {
             for (int i = s; i < e; i++) {
                 int x = below.target(i);
                 if (stamp[x] != y) {
-                    covers.add(x);
+                    covers[kept++] = x;
                 }
             }
-            offsets[y + 1] = covers.size();
+            offsets[y + 1] = kept;
         }
-        return new Adjacency(offsets, covers.toIntArray());
+        return new Adjacency(offsets, kept == covers.length ? covers : Arrays.copyOf(covers, kept));
     }
 
     /**

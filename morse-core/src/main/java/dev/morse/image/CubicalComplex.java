@@ -1,6 +1,7 @@
 package dev.morse.image;
 
 import dev.morse.complex.Boundary;
+import dev.morse.complex.CoboundaryCache;
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexKind;
 import dev.morse.complex.GradedCells;
@@ -45,7 +46,7 @@ public final class CubicalComplex implements ChainComplex {
     private final int[] typeOrder;
     private final GradedCells cells;
     private final Boundary boundary;
-    private volatile Boundary coboundary;
+    private final CoboundaryCache coboundary;
 
     private CubicalComplex(VoxelSet voxels, long maxCells) {
         axes = voxels.axes();
@@ -101,6 +102,7 @@ public final class CubicalComplex implements ChainComplex {
         }
         cells = new GradedCells(perDimension);
         boundary = buildBoundary((int) next, (int) entries);
+        coboundary = new CoboundaryCache(boundary);
     }
 
     /**
@@ -310,17 +312,7 @@ public final class CubicalComplex implements ChainComplex {
 
     @Override
     public Boundary coboundary() {
-        Boundary result = coboundary;
-        if (result == null) {
-            synchronized (this) {
-                result = coboundary;
-                if (result == null) {
-                    result = boundary.transpose(boundary.cellCount());
-                    coboundary = result;
-                }
-            }
-        }
-        return result;
+        return coboundary.get();
     }
 
     /** The elementary cube as a product of intervals, like {@code [2,3]x[5]x[0,1]}; made on request. */

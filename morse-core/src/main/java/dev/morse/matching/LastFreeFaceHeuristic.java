@@ -4,7 +4,6 @@ import dev.morse.complex.ChainComplex;
 import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrays;
 import it.unimi.dsi.fastutil.ints.IntHeapPriorityQueue;
-import java.util.Arrays;
 
 /**
  * Collapses in reverse lexicographic order, the deterministic "rev-lex" strategy that Benedetti and
@@ -67,18 +66,9 @@ public final class LastFreeFaceHeuristic implements MatchingHeuristic {
 
     /** The position of each cell in the lexicographic order of vertex tuples. */
     static int[] lexicographicRanks(ChainComplex complex) {
-        int n = complex.cellCount();
-        int[][] tuples = new int[n][];
-        for (int c = 0; c < n; c++) {
-            tuples[c] = complex.vertexTuple(c);
-        }
-        int[] order = new int[n];
-        for (int c = 0; c < n; c++) {
-            order[c] = c;
-        }
-        IntArrays.mergeSort(order, (a, b) -> Arrays.compare(tuples[a], tuples[b]));
-        int[] rank = new int[n];
-        for (int i = 0; i < n; i++) {
+        int[] order = LexicographicHeuristic.lexicographicOrder(complex);
+        int[] rank = new int[order.length];
+        for (int i = 0; i < order.length; i++) {
             rank[order[i]] = i;
         }
         return rank;

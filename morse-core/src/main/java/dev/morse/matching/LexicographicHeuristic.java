@@ -74,7 +74,8 @@ public final class LexicographicHeuristic implements MatchingHeuristic {
         return Matching.adopt(mates);
     }
 
-    private static int[] lexicographicOrder(ChainComplex complex) {
+    /** The cells in the lexicographic order of their vertex tuples. */
+    static int[] lexicographicOrder(ChainComplex complex) {
         int n = complex.cellCount();
         int[][] tuples = new int[n][];
         for (int c = 0; c < n; c++) {

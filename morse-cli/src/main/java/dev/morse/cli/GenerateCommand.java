@@ -97,6 +97,14 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.subspaceLattice(q, n, proper));
     }
 
+    @Command(name = "bruhat", mixinStandardHelpOptions = true, description = "The Bruhat order of the symmetric group"
+            + " S_n (n <= 6), permutations in one-line notation; proper part: without the identity and the reversal.")
+    int bruhat(@Parameters(paramLabel = "N", description = "The degree of the symmetric group.") int n,
+            @Option(names = "--proper", description = PROPER) boolean proper,
+            @Mixin OutputFile output) throws IOException {
+        return output.write(() -> Families.bruhatOrder(n, proper));
+    }
+
     @Command(name = "divisor", mixinStandardHelpOptions = true, description = "The divisors of N under divisibility; proper part: the open interval"
             + " (1, N).")
     int divisor(@Parameters(paramLabel = "N", description = "The number.") int n,

@@ -67,6 +67,12 @@ public final class Families {
         return new Generated.OfPoset(p, "the subspace lattice of F_" + q + "^" + n + part(proper));
     }
 
+    /** The Bruhat order of S_n, or its proper part. */
+    public static Generated bruhatOrder(int n, boolean proper) {
+        Poset p = proper ? BruhatOrder.properPart(n) : BruhatOrder.of(n);
+        return new Generated.OfPoset(p, "the Bruhat order of S_" + n + part(proper));
+    }
+
     /** The divisors of N, or the open interval (1, N). */
     public static Generated divisorLattice(int n, boolean proper) {
         Poset p = proper ? DivisorLattice.openInterval(n) : DivisorLattice.lattice(n);

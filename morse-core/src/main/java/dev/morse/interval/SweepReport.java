@@ -24,7 +24,7 @@ import java.util.Optional;
  *
  * @param source the input's name
  * @param coefficients the coefficients of the homology and of the verdicts
- * @param elements the number of elements of P
+ * @param hat P̂, whose labels name the intervals
  * @param intervals the number of intervals {@code x < y} of P̂
  * @param pure whether P̂ is pure
  * @param rank the rank of 1̂ (the length of P̂) when pure, else -1
@@ -37,7 +37,7 @@ import java.util.Optional;
  * @param mobius μ on every interval of P̂
  * @param allIntervals every interval of P̂, in sweep order
  */
-public record SweepReport(String source, Coefficients coefficients, int elements, long intervals, boolean pure,
+public record SweepReport(String source, Coefficients coefficients, PosetWithBounds hat, long intervals, boolean pure,
         int rank, List<IntervalResult> results, boolean cohenMacaulay, Optional<IntervalResult> witness,
         Optional<Boolean> spherical, boolean eulerian, boolean gorensteinStar, MobiusTable mobius,
         List<IntervalTask> allIntervals) {
@@ -71,9 +71,19 @@ public record SweepReport(String source, Coefficients coefficients, int elements
             int length = hat.height(t.upper()) - hat.height(t.lower());
             eulerian = mobius.value(t.lower(), t.upper()).equals(BigInteger.valueOf(length % 2 == 0 ? 1 : -1));
         }
-        return new SweepReport(source, coefficients, hat.size(), hat.intervalCount(), pure,
+        return new SweepReport(source, coefficients, hat, hat.intervalCount(), pure,
                 pure ? hat.height(hat.top()) : -1, results, cm, Optional.ofNullable(witness), spherical, eulerian,
                 cm && spheres, mobius, all);
+    }
+
+    /** The label of an element of P, or {@code null} for 0̂ and 1̂. */
+    public String label(int id) {
+        return hat.label(id);
+    }
+
+    /** μ(x, y) of an interval. */
+    public BigInteger mobius(IntervalTask task) {
+        return mobius.value(task.lower(), task.upper());
     }
 
     /** How many intervals were swept. */

@@ -19,7 +19,7 @@ import java.util.Locale;
 /**
  * Measures interval sweeps ({@link IntervalSweep}) with one thread and with more, on one generated
  * poset: intervals per second of wall-clock time, the process's CPU time, and the speedup over one
- * thread. Rounds alternate the thread counts and each keeps its fastest, to damp the noise of a shared
+ * thread, with the time spent in garbage collection. Rounds alternate the thread counts and each keeps its fastest, to damp the noise of a shared
  * machine; the load average before the runs is printed too. Every sweep must give the same results.
  *
  * <p>Arguments: {@code family n rounds threads...} with family one of {@code cube} (boundary face
@@ -47,24 +47,28 @@ public final class IntervalTable {
             default -> throw new IllegalArgumentException("unknown family " + family);
         };
         Request request = Request.defaults().withHomology(Coefficients.RATIONALS, true);
-        // warm the code paths up on a small case first, so the rows measure the work, not the JIT
-        PosetWithBounds warm = PosetWithBounds.of(CubeFaces.boundaryFacePoset(5));
-        for (int i = 0; i < 3; i++) {
-            IntervalSweep.run(warm, "warm", new SweepOptions(request, threads[threads.length - 1], false));
+        // warm the code paths up first (the engine's many small runs take a while to be compiled), so the
+        // rows measure the work, not the JIT
+        PosetWithBounds warm = PosetWithBounds.of(CubeFaces.boundaryFacePoset(6));
+        for (int i = 0; i < 4; i++) {
+            IntervalSweep.run(warm, "warm", new SweepOptions(request, threads[i % threads.length], false));
         }
         String load = Files.readString(Path.of("/proc/loadavg")).trim();
         PosetWithBounds hat = PosetWithBounds.of(poset);
         double[] best = new double[threads.length];
         double[] cpu = new double[threads.length];
+        double[] gc = new double[threads.length];
         java.util.Arrays.fill(best, Double.MAX_VALUE);
         SweepReport first = null;
         for (int round = 0; round < rounds; round++) {
             for (int t = 0; t < threads.length; t++) {
                 long cpuStart = processCpuNanos();
+                long gcStart = gcMillis();
                 long start = System.nanoTime();
                 SweepReport report = IntervalSweep.run(hat, family + n, new SweepOptions(request, threads[t], false));
                 double seconds = (System.nanoTime() - start) / 1e9;
                 double cpuSeconds = (processCpuNanos() - cpuStart) / 1e9;
+                double gcSeconds = (gcMillis() - gcStart) / 1e3;
                 if (first == null) {
                     first = report;
                 } else if (!first.results().equals(report.results())) {
@@ -73,14 +77,23 @@ public final class IntervalTable {
                 if (seconds < best[t]) {
                     best[t] = seconds;
                     cpu[t] = cpuSeconds;
+                    gc[t] = gcSeconds;
                 }
             }
         }
         for (int t = 0; t < threads.length; t++) {
-            System.out.printf(Locale.ROOT, "| %s %d | %,d | %,d | %,d / %,d | %d | %.2f | %,.0f | %.2f | %.2f | %s |%n", family, n,
-                    poset.size(), first.intervals(), first.computed(), first.skipped(), threads[t], best[t],
-                    first.intervals() / best[t], cpu[t], best[0] / best[t], load);
+            System.out.printf(Locale.ROOT, "| %s %d | %,d | %,d | %,d / %,d | %d | %.2f | %,.0f | %.2f | %.2f | %.2f | %s |%n",
+                    family, n, poset.size(), first.intervals(), first.computed(), first.skipped(), threads[t], best[t],
+                    first.intervals() / best[t], cpu[t], gc[t], best[0] / best[t], load);
         }
+    }
+
+    private static long gcMillis() {
+        long total = 0;
+        for (var bean : ManagementFactory.getGarbageCollectorMXBeans()) {
+            total += Math.max(0, bean.getCollectionTime());
+        }
+        return total;
     }
 
     private static long processCpuNanos() {

@@ -212,6 +212,22 @@ class IntervalSweepTest {
     }
 
     @Test
+    void unitsOfWorkSurviveJavaSerialisation() throws Exception {
+        // the sweep's unit of work and its answer travel between machines as plain serialised values
+        IntervalResult r = new IntervalResult(new IntervalTask(3, 7), 2, true, new IntervalHomology(0,
+                java.util.List.of(0, 1, 2), java.util.List.of(java.util.List.of(), java.util.List.of(BigInteger.TWO),
+                        java.util.List.of())), IntervalResult.How.COMPUTED);
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        try (java.io.ObjectOutputStream out = new java.io.ObjectOutputStream(bytes)) {
+            out.writeObject(r);
+        }
+        try (java.io.ObjectInputStream in = new java.io.ObjectInputStream(
+                new java.io.ByteArrayInputStream(bytes.toByteArray()))) {
+            assertEquals(r, in.readObject());
+        }
+    }
+
+    @Test
     void emptyIntervalsAreTheMinusOneSphere() {
         // a cover x ⋖ y: the empty complex, H~_{-1} = Z, μ = -1 (Philip Hall: μ = reduced Euler characteristic)
         SweepReport r = sweep(SimplexFaces.boundaryFacePoset(2), Coefficients.INTEGERS);

@@ -105,10 +105,10 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.bruhatOrder(n, proper));
     }
 
-    @Command(name = "all-posets", mixinStandardHelpOptions = true, description = "Every poset on n elements (n <= 7)"
+    @Command(name = "posets", mixinStandardHelpOptions = true, description = "Every poset on n elements (n <= 7)"
             + " up to isomorphism, one file each (nN-0001.poset, ...) in a directory: 1, 1, 2, 5, 16, 63, 318, 2045 of"
             + " them for n = 0..7.")
-    int allPosets(@Parameters(paramLabel = "N", description = "The number of elements.") int n,
+    int posets(@Parameters(paramLabel = "N", description = "The number of elements.") int n,
             @Option(names = {"-o", "--output"}, paramLabel = "DIR", required = true,
                     description = "The directory to write into; created if needed.") java.nio.file.Path directory)
             throws IOException {

@@ -93,6 +93,23 @@ class BatchCommandTest {
                 "Pi_5 proper part: a wedge of 4! spheres S^2 (Björner 1980)");
     }
 
+    @Test
+    void everyPosetOnFourElementsGetsALine() throws IOException {
+        // 16 posets on 4 elements up to isomorphism (OEIS A000112, from memory), one file each
+        Path all = dir.resolve("all4");
+        CliRun generated = CliRun.morse("generate", "posets", "4", "-o", all.toString());
+        assertEquals(0, generated.code(), generated.err());
+        assertEquals("wrote 16 posets on 4 elements into " + all + "\n", generated.out());
+        CliRun run = CliRun.morse("batch", all.toString(), "--cohen-macaulay", "--threads", "2");
+        assertEquals(0, run.code(), run.err());
+        List<Map<String, Object>> out = lines(run.out());
+        assertEquals(16, out.size());
+        // the last in canonical order is the 4-chain: a simplex, contractible and Cohen–Macaulay (common practice)
+        assertEquals(all.resolve("n4-0016.poset").toString(), out.get(15).get("input"));
+        assertEquals(true, out.get(15).get("cohen_macaulay"));
+        assertEquals(List.of(1L, 0L, 0L, 0L), CliFiles.betti(out.get(15)));
+    }
+
     private static List<String> withoutTimings(String out) {
         return out.lines().map(l -> l.replaceAll("\"timings_ms\":\\{[^}]*\\}", "")
                 .replaceAll("\"ms\":[0-9.]+", "")).toList();

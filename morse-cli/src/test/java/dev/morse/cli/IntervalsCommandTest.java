@@ -59,7 +59,7 @@ class IntervalsCommandTest {
     @Test
     @SuppressWarnings("unchecked")
     void partitionLatticeMobiusTableEndsWithTheKnownValue() throws IOException {
-        // μ(Π_4) = (-1)^3 3! = -6 (Stanley, EC I, Example 3.10.4); geometric lattice: Cohen–Macaulay (Björner 1980)
+        // μ(Π_4) = (-1)^3 3! = -6 (Stanley, EC I, Example 3.10.4, from memory); geometric lattice: Cohen–Macaulay (Björner 1980)
         Path file = dir.resolve("pi4.poset");
         assertEquals(0, CliRun.morse("generate", "partition", "4", "--proper", "-o", file.toString()).code());
         Map<String, Object> out = json("intervals", file.toString(), "--json", "--mobius", "--coefficients", "Z");

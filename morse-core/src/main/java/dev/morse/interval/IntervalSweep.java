@@ -23,8 +23,8 @@ import java.util.concurrent.atomic.AtomicLong;
  * number of threads; with {@code firstFailure} every interval before the first failing one is still
  * solved, so the witness is the same too. The Möbius function of every interval
  * ({@link MobiusTable}) is checked against the reduced Euler characteristic of the interval's order
- * complex, which Philip Hall's theorem says it equals (Rota 1964, Prop. 6; Stanley, Enumerative
- * Combinatorics I, Prop. 3.8.5).
+ * complex, which Philip Hall's theorem says it equals (Rota 1964; Stanley, Enumerative
+ * Combinatorics I, Prop. 3.8.5, from memory).
  *
  * <p>Progress: the calling thread reports the count of solved intervals to its
  * {@link Progress#current()} sink while the workers, silent themselves, solve.

@@ -7,7 +7,7 @@ import java.util.Arrays;
 /**
  * The Möbius function μ(x, y) of P̂ on every interval {@code x < y}, row by row from its defining
  * recursion {@code μ(x, x) = 1}, {@code μ(x, y) = -Σ_{x ≤ z < y} μ(x, z)} (Rota 1964; Stanley,
- * Enumerative Combinatorics I, §3.7). A row costs one pass over the down-sets of the elements above x.
+ * Enumerative Combinatorics I, §3.7, from memory). A row costs one pass over the down-sets of the elements above x.
  * Exact: longs while they suffice, BigInteger for the whole table after an overflow.
  *
  * <p>Memory: 8 bytes per interval (or a BigInteger each after an overflow), plus 4 bytes per element.

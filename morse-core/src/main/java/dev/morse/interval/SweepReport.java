@@ -17,7 +17,7 @@ import java.util.Optional;
  * <li><b>spherical</b>: the reduced homology of Δ(P), the interval (0̂, 1̂), lies only in its top
  *     dimension; unknown when a sweep stopped at a failure before reaching (0̂, 1̂);
  * <li><b>Eulerian</b>: P̂ is pure and {@code μ(x, y) = (-1)^(r(y) - r(x))} on every interval
- *     (Stanley, Enumerative Combinatorics I, §3.16);
+ *     (Stanley, Enumerative Combinatorics I, §3.16, from memory);
  * <li><b>Gorenstein*</b>: Cohen–Macaulay, and every open interval a homology sphere, its top reduced
  *     homology of rank one (Stanley, Combinatorics and Commutative Algebra, 1996, Ch. II §5, from memory).
  * </ul>

@@ -35,7 +35,7 @@ class IntervalSweepTest {
     @Test
     void partitionLatticeIsCohenMacaulayWithTheKnownMobiusValue() {
         // Π_n is a geometric lattice, so Cohen–Macaulay (Folkman 1966; Björner 1980);
-        // μ(Π_n) = (-1)^(n-1) (n-1)! (Stanley, Enumerative Combinatorics I, Example 3.10.4)
+        // μ(Π_n) = (-1)^(n-1) (n-1)! (Stanley, Enumerative Combinatorics I, Example 3.10.4, from memory)
         Poset p = PartitionLattice.properPart(5);
         SweepReport r = sweep(p, Coefficients.INTEGERS);
         assertTrue(r.pure());
@@ -65,7 +65,7 @@ class IntervalSweepTest {
     void subspaceLatticeIsCohenMacaulay() {
         // the lattice of subspaces of F_q^n is geometric, so Cohen–Macaulay (Folkman 1966); its proper part
         // is a wedge of q^(n(n-1)/2) spheres S^(n-2) (Solomon 1969), so μ = (-1)^n q^(n(n-1)/2)
-        // (Stanley, EC I, Example 3.10.2)
+        // (Stanley, EC I, Example 3.10.2, from memory)
         Poset p = SubspaceLattice.properPart(2, 3);
         SweepReport r = sweep(p, Coefficients.INTEGERS);
         assertTrue(r.cohenMacaulay());
@@ -76,7 +76,7 @@ class IntervalSweepTest {
 
     @Test
     void booleanLatticeIntervalsHaveMobiusMinusOneToTheLength() {
-        // every interval [S, T] of B_n has μ = (-1)^|T - S| (Stanley, EC I, Example 3.8.3), so B_n is
+        // every interval [S, T] of B_n has μ = (-1)^|T - S| (Stanley, EC I, Example 3.8.3, from memory); B_n is
         // Eulerian; it is the face lattice of a simplex, a sphere, so Gorenstein*
         Poset p = BooleanLattice.properPart(5);
         SweepReport r = sweep(p, Coefficients.RATIONALS);
@@ -95,7 +95,7 @@ class IntervalSweepTest {
     @Test
     void faceLatticeOfTheCubeBoundaryIsEulerianAndGorensteinStar() {
         // the boundary of the 3-cube is a shellable sphere (Bruggesser–Mani 1971): Cohen–Macaulay; face posets
-        // of spheres are Eulerian and Gorenstein* (Stanley, Combinatorics and Commutative Algebra, 1996, Ch. II)
+        // of spheres are Eulerian and Gorenstein* (Stanley, Combinatorics and Commutative Algebra, 1996, Ch. II, from memory)
         SweepReport r = sweep(CubeFaces.boundaryFacePoset(3), Coefficients.INTEGERS);
         assertTrue(r.cohenMacaulay());
         assertTrue(r.eulerian());

@@ -2,6 +2,7 @@ package dev.morse.cli;
 
 import dev.morse.engine.Request;
 import dev.morse.homology.Coefficients;
+import dev.morse.input.InputReaders;
 import dev.morse.interval.IntervalSweep;
 import dev.morse.interval.PosetWithBounds;
 import dev.morse.interval.SweepInputs;
@@ -16,6 +17,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code morse intervals FILE}: the homology of every open interval of P̂ and the verdicts built on them. */
@@ -32,8 +34,8 @@ final class IntervalsCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Mixin
-    private InputOptions input;
+    @Parameters(index = "0", paramLabel = "FILE", description = "A morse-poset 1 or morse-simplicial 1 file.")
+    private Path file;
 
     @Option(names = "--coefficients", paramLabel = "Z|Q|P", defaultValue = "Q",
             converter = OptionConverters.CoefficientsConverter.class,
@@ -72,7 +74,7 @@ final class IntervalsCommand implements Callable<Integer> {
                 .withMatching(matching.name(), runs.seed(), runs.trials()).withVerify(runs.verify());
         SweepOptions options = new SweepOptions(request, threads.threads(spec), firstFailure);
         SweepReport report = run.around(spec, () -> {
-            var read = input.read(spec);
+            var read = InputReaders.read(file);
             PosetWithBounds hat = PosetWithBounds.of(SweepInputs.posetOf(read));
             return IntervalSweep.run(hat, read.source(), options);
         });

@@ -97,6 +97,38 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.subspaceLattice(q, n, proper));
     }
 
+    @Command(name = "bruhat", mixinStandardHelpOptions = true, description = "The Bruhat order of the symmetric group"
+            + " S_n (n <= 6), permutations in one-line notation; proper part: without the identity and the reversal.")
+    int bruhat(@Parameters(paramLabel = "N", description = "The degree of the symmetric group.") int n,
+            @Option(names = "--proper", description = PROPER) boolean proper,
+            @Mixin OutputFile output) throws IOException {
+        return output.write(() -> Families.bruhatOrder(n, proper));
+    }
+
+    @Command(name = "posets", mixinStandardHelpOptions = true, description = "Every poset on n elements (n <= 7)"
+            + " up to isomorphism, one file each (nN-0001.poset, ...) in a directory: 1, 1, 2, 5, 16, 63, 318, 2045 of"
+            + " them for n = 0..7.")
+    int posets(@Parameters(paramLabel = "N", description = "The number of elements.") int n,
+            @Option(names = {"-o", "--output"}, paramLabel = "DIR", required = true,
+                    description = "The directory to write into; created if needed.") java.nio.file.Path directory)
+            throws IOException {
+        java.util.List<dev.morse.generate.Generated> all;
+        try {
+            all = Families.allPosets(n);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), e.getMessage(), e);
+        }
+        java.util.Map<String, String> files = new java.util.LinkedHashMap<>();
+        for (int i = 0; i < all.size(); i++) {
+            dev.morse.generate.Generated g = all.get(i);
+            files.put(String.format(java.util.Locale.ROOT, "n%d-%04d.poset", n, i + 1),
+                    dev.morse.io.TextOutput.render(g::write));
+        }
+        OutputFiles.writeAll(directory, files);
+        spec.commandLine().getOut().println("wrote " + all.size() + " posets on " + n + " elements into " + directory);
+        return 0;
+    }
+
     @Command(name = "divisor", mixinStandardHelpOptions = true, description = "The divisors of N under divisibility; proper part: the open interval"
             + " (1, N).")
     int divisor(@Parameters(paramLabel = "N", description = "The number.") int n,

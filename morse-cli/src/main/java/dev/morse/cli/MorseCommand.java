@@ -16,7 +16,7 @@ import picocli.CommandLine.Spec;
         description = "Exact homology of posets (order complexes), CW posets (cellular complexes) and simplicial complexes.",
         subcommands = {HomologyCommand.class, DemoCommand.class,
             InspectCommand.class, CompareCommand.class, DrawCommand.class, ExportCommand.class,
-            GenerateCommand.class, OperationCommand.class,
+            GenerateCommand.class, OperationCommand.class, IntervalsCommand.class, BatchCommand.class,
             CommandLine.HelpCommand.class},
         footer = "%nExit codes: 0 success, 2 bad input or options, 1 internal failure.")
 public final class MorseCommand implements Callable<Integer> {

@@ -63,6 +63,23 @@ public final class Families {
         return new Generated.OfPoset(p, "the subspace lattice of F_" + q + "^" + n + part(proper));
     }
 
+    /** The Bruhat order of S_n, or its proper part. */
+    public static Generated bruhatOrder(int n, boolean proper) {
+        Poset p = proper ? BruhatOrder.properPart(n) : BruhatOrder.of(n);
+        return new Generated.OfPoset(p, "the Bruhat order of S_" + n + part(proper));
+    }
+
+    /** Every poset on {@code n} elements up to isomorphism ({@link AllPosets}), each as its own input. */
+    public static java.util.List<Generated> allPosets(int n) {
+        java.util.List<Poset> all = AllPosets.of(n);
+        java.util.List<Generated> out = new java.util.ArrayList<>();
+        for (int i = 0; i < all.size(); i++) {
+            out.add(new Generated.OfPoset(all.get(i), "poset " + (i + 1) + " of the " + all.size() + " on " + n
+                    + " elements up to isomorphism"));
+        }
+        return out;
+    }
+
     /** The divisors of N, or the open interval (1, N). */
     public static Generated divisorLattice(int n, boolean proper) {
         Poset p = proper ? DivisorLattice.openInterval(n) : DivisorLattice.lattice(n);

@@ -19,13 +19,27 @@ public final class MatchingHeuristics {
     private MatchingHeuristics() {
     }
 
+    /**
+     * The plug-ins on the class path, looked up once: scanning the class path costs tens of
+     * microseconds, and interval sweeps and batches ask for a heuristic by name per run.
+     */
+    private static final class PlugIns {
+        static final List<MatchingHeuristic> LOADED = load();
+
+        private static List<MatchingHeuristic> load() {
+            List<MatchingHeuristic> found = new ArrayList<>();
+            ServiceLoader.load(MatchingHeuristic.class).forEach(found::add);
+            return List.copyOf(found);
+        }
+    }
+
     /** All heuristics by name, built-ins first. A fresh unmodifiable map each call. */
     public static Map<String, MatchingHeuristic> all() {
         Map<String, MatchingHeuristic> byName = new LinkedHashMap<>();
         for (MatchingHeuristic h : builtIn()) {
             byName.put(h.name(), h);
         }
-        for (MatchingHeuristic h : ServiceLoader.load(MatchingHeuristic.class)) {
+        for (MatchingHeuristic h : PlugIns.LOADED) {
             byName.putIfAbsent(h.name(), h);
         }
         return Collections.unmodifiableMap(byName);

@@ -68,39 +68,46 @@ public final class JsonReportWriter {
         try (JsonGenerator json = FACTORY.createGenerator(out)) {
             json.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
             json.setPrettyPrinter(prettyPrinter());
-            json.writeStartObject();
-            json.writeStringField("input", report.source());
-            json.writeStringField("format", report.format().name().toLowerCase(java.util.Locale.ROOT));
-            json.writeStringField("complex", report.complexKind().reportName());
-            json.writeStringField("engine", report.engineName());
-            writeIntArray(json, "cells", report.cells());
-            json.writeStringField("matching", report.matchingName());
-            writeIntArray(json, "critical", report.critical());
-            json.writeStringField("coefficients", report.coefficients().toString());
-            json.writeBooleanField("reduced", report.reduced());
-            writeHomology(json, report.homology().groups());
-            json.writeNumberField("morse_lower_bound", report.morseLowerBound());
-            json.writeNumberField("excess", report.excess());
-            writeRounds(json, report.rounds());
-            if (!report.trials().isEmpty()) {
-                writeTrials(json, report.trials());
-            }
-            writeCwCheck(json, report.cwCheck());
-            writeEngine(json, report);
-            if (report.format() == InputFormat.POSET) {
-                writePosetReduction(json, report.posetReduction());
-            }
-            if (report.image().isPresent()) {
-                writeImage(json, report.image().get());
-            }
-            if (!cycles.isEmpty()) {
-                CycleJson.write(json, cycles);
-            }
-            writeTimings(json, report.timings());
-            json.writeEndObject();
+            writeObject(report, json, extra -> {
+                if (!cycles.isEmpty()) {
+                    CycleJson.write(extra, cycles);
+                }
+            });
         }
         out.write('\n');
         out.flush();
+    }
+
+    /** Writes the report's object to {@code json}, with {@code extra} fields last, in the generator's layout. */
+    static void writeObject(Computation report, JsonGenerator json, JsonStyle.Body extra) throws IOException {
+        json.writeStartObject();
+        json.writeStringField("input", report.source());
+        json.writeStringField("format", report.format().name().toLowerCase(java.util.Locale.ROOT));
+        json.writeStringField("complex", report.complexKind().reportName());
+        json.writeStringField("engine", report.engineName());
+        writeIntArray(json, "cells", report.cells());
+        json.writeStringField("matching", report.matchingName());
+        writeIntArray(json, "critical", report.critical());
+        json.writeStringField("coefficients", report.coefficients().toString());
+        json.writeBooleanField("reduced", report.reduced());
+        writeHomology(json, report.homology().groups());
+        json.writeNumberField("morse_lower_bound", report.morseLowerBound());
+        json.writeNumberField("excess", report.excess());
+        writeRounds(json, report.rounds());
+        if (!report.trials().isEmpty()) {
+            writeTrials(json, report.trials());
+        }
+        writeCwCheck(json, report.cwCheck());
+        writeEngine(json, report);
+        if (report.format() == InputFormat.POSET) {
+            writePosetReduction(json, report.posetReduction());
+        }
+        if (report.image().isPresent()) {
+            writeImage(json, report.image().get());
+        }
+        writeTimings(json, report.timings());
+        extra.write(json);
+        json.writeEndObject();
     }
 
     private static DefaultPrettyPrinter prettyPrinter() {

@@ -1,0 +1,53 @@
+package dev.morse.interval;
+
+import dev.morse.complex.Boundary;
+import dev.morse.complex.SimplicialComplex;
+import dev.morse.input.FacetInput;
+import dev.morse.input.Input;
+import dev.morse.input.PosetInput;
+import dev.morse.io.InputException;
+import dev.morse.poset.Poset;
+import dev.morse.poset.PosetBuilder;
+
+/**
+ * The poset whose intervals a sweep visits, for each kind of input: a poset file's own poset; for a
+ * simplicial file, its face poset (nonempty faces by inclusion, each labelled like {@code {a b}}),
+ * whose order complex is the barycentric subdivision of the complex, so that the verdicts (all of
+ * them topological or combinatorial invariants of the complex; Munkres 1984 for Cohen–Macaulayness)
+ * are the complex's own. Images have no sweep.
+ */
+public final class SweepInputs {
+    private SweepInputs() {
+    }
+
+    /**
+     * The poset to sweep for {@code input}.
+     *
+     * @throws InputException for an image or volume
+     */
+    public static Poset posetOf(Input input) {
+        if (input instanceof PosetInput poset) {
+            return poset.poset();
+        }
+        if (input instanceof FacetInput facets) {
+            return facePoset(SimplicialComplex.of(facets.facets()));
+        }
+        throw new InputException(input.source(), InputException.NO_LINE,
+                "an interval sweep needs a poset or a simplicial file, not an image");
+    }
+
+    /** The nonempty faces of {@code complex} ordered by inclusion, each covering its facets. */
+    static Poset facePoset(SimplicialComplex complex) {
+        PosetBuilder b = new PosetBuilder();
+        for (int c = 0; c < complex.cellCount(); c++) {
+            b.element(complex.cellName(c));
+        }
+        Boundary boundary = complex.boundary();
+        for (int c = 0; c < complex.cellCount(); c++) {
+            for (int i = boundary.start(c); i < boundary.end(c); i++) {
+                b.relate(boundary.target(i), c, 0);
+            }
+        }
+        return b.buildKnownAcyclic();
+    }
+}

@@ -10,8 +10,8 @@ import picocli.CommandLine.ParseResult;
 
 /**
  * The one place where failures become messages and exit codes. Bad input is one line
- * {@code FILE:LINE: what is wrong} and exit code 2; a bad option is one line and a hint and exit
- * code 2; anything else is an internal failure, one line and exit code 1. A stack trace follows
+ * {@code FILE:LINE: what is wrong} and exit code 2; a bad option is one line ending in a hint and
+ * exit code 2; anything else is an internal failure, one line and exit code 1. A stack trace follows
  * only with {@code --debug}. Subcommands write their output only after success, so a failure leaves
  * standard output empty.
  */
@@ -27,8 +27,9 @@ final class Failures implements IExecutionExceptionHandler, IParameterExceptionH
     public int handleParseException(ParameterException ex, String[] args) {
         CommandLine command = ex.getCommandLine();
         PrintWriter err = command.getErr();
-        err.println("morse: " + firstLine(ex.getMessage()));
-        err.println("Try '" + command.getCommandSpec().qualifiedName() + " --help' for the options.");
+        // one line, as for bad input: scripts read the first line of standard error
+        err.println("morse: " + firstLine(ex.getMessage()) + " (see '" + command.getCommandSpec().qualifiedName()
+                + " --help')");
         err.flush();
         return BAD_INPUT;
     }

@@ -7,7 +7,9 @@ import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 
@@ -27,11 +29,26 @@ public final class AtomicOutput {
     private AtomicOutput() {
     }
 
+    /** The one line for a target the file system refuses: its name and the reason, no exception class. */
+    private static InputException cannotBeWritten(Path target, IOException e) {
+        String reason;
+        if (e instanceof AccessDeniedException) {
+            reason = "permission denied";
+        } else if (e instanceof NoSuchFileException) {
+            reason = "its directory does not take new files";
+        } else if (e instanceof FileSystemException f && f.getReason() != null) {
+            reason = f.getReason();
+        } else {
+            reason = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+        }
+        return new InputException(target.toString(), InputException.NO_LINE, "cannot be written: " + reason);
+    }
+
     /**
      * Writes {@code content} to {@code target} as UTF-8.
      *
      * @throws InputException when the target's directory does not exist, cannot be written, or the
-     *     target is a directory
+     *     target is a directory; also when the file system refuses the temporary file or the move
      * @throws IOException when writing fails
      */
     public static void write(Path target, Content content) throws IOException {
@@ -46,8 +63,8 @@ public final class AtomicOutput {
         Path temporary;
         try {
             temporary = Files.createTempFile(directory, "." + absolute.getFileName() + ".", ".part");
-        } catch (AccessDeniedException e) {
-            throw new InputException(target.toString(), InputException.NO_LINE, "cannot be written: permission denied");
+        } catch (IOException e) {
+            throw cannotBeWritten(target, e);
         }
         boolean done = false;
         try {
@@ -61,6 +78,9 @@ public final class AtomicOutput {
                 Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING);
             }
             done = true;
+        } catch (IOException e) {
+            // a full disk or a refused move: the reader needs the reason, not the exception class
+            throw cannotBeWritten(target, e);
         } finally {
             if (!done) {
                 Files.deleteIfExists(temporary);

@@ -55,7 +55,8 @@ public final class ComparisonChartSvg {
         Svg svg = new Svg(width, height);
         svg.text("title", "critical cells per dimension: " + report.input());
         svg.text("text", title, "x", Svg.number(LEFT), "y", "24", "font-size", "15");
-        svg.text("text", "dashed: Morse lower bound of the dimension, total " + report.morseLowerBound(),
+        svg.text("text", "dashed: " + TextReportWriter.boundOver(report.homology().coefficients())
+                + " of the dimension, total " + report.morseLowerBound(),
                 "x", Svg.number(LEFT), "y", "42", "font-size", "11", "fill", "#555");
         double baseline = TOP + PLOT_HEIGHT;
         for (long t = 0; t <= top; t += step) {

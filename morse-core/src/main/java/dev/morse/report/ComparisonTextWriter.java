@@ -33,7 +33,8 @@ public final class ComparisonTextWriter {
         row(text, "cells", counted(report.cells()));
         row(text, "homology", homologyLine(report) + " (by " + report.referenceMatching()
                 + (report.runs().size() > 1 ? "; every matching agrees)" : ")"));
-        row(text, "bound", "Morse lower bound " + counted(report.boundByDimension()));
+        row(text, "bound", TextReportWriter.boundOver(report.homology().coefficients()) + " "
+                + counted(report.boundByDimension()) + TextReportWriter.boundCaveat(report.homology().coefficients()));
         text.append('\n');
         table(text, report);
         for (MatchingRun run : report.runs()) {

@@ -46,7 +46,8 @@ public final class TextReportWriter {
         row(text, "cells", countsLine(report.cells()));
         row(text, "matching", matchingLine(report));
         report.implicitRun().ifPresent(run -> row(text, "walk", walkLine(run)));
-        row(text, "bound", "Morse lower bound " + report.morseLowerBound() + ", excess " + report.excess());
+        row(text, "bound", boundOver(report.coefficients()) + " " + report.morseLowerBound() + ", excess "
+                + report.excess() + boundCaveat(report.coefficients()));
         for (ReductionRound round : report.rounds()) {
             row(text, "round " + round.round(), round.pairsRemoved() + " pairs removed, left "
                     + countsLine(Arrays.stream(round.cellCounts()).boxed().toList()));
@@ -178,6 +179,21 @@ public final class TextReportWriter {
         return String.format(Locale.ROOT, "element order %s: %d chains from the bottom walked, %d maximal chains"
                 + " reached, %d subtrees skipped, %d defective fibres", run.order().optionName(), run.search().nodes(),
                 run.search().facets(), run.search().skippedSubtrees(), run.search().defectiveFacets());
+    }
+
+    /**
+     * "Morse lower bound", with the field it was computed over unless that is Z. Over a field the
+     * bound counts Betti numbers over that field; integral torsion, which a field does not see
+     * (Z/2 is invisible over Q), can only raise it (Forman 1998: the bound over Z is
+     * Σ β_d + t_d + t_(d−1)).
+     */
+    static String boundOver(Coefficients coefficients) {
+        return coefficients.hasTorsion() ? "Morse lower bound" : "Morse lower bound over " + JsonStyle.ringLabel(coefficients);
+    }
+
+    /** Why a bound over a field may be lower than the matching can reach. */
+    static String boundCaveat(Coefficients coefficients) {
+        return coefficients.hasTorsion() ? "" : " (integral torsion, not seen over a field, may raise the bound)";
     }
 
     private static String ringName(Coefficients coefficients) {

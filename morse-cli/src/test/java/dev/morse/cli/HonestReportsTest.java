@@ -121,6 +121,30 @@ class HonestReportsTest {
     }
 
     @Test
+    void groupsOverAPrimeFieldArePrintedAsVectorSpaces() throws IOException {
+        // the proper part of Pi_5 is a wedge of 4! = 24 spheres S^2 (Björner 1980), so over F_3 the
+        // homology is F_3, 0, F_3^24; the text must not read like torsion (Z/3)^24
+        String pi5 = dir.resolve("pi5.poset").toString();
+        assertEquals(0, CliRun.morse("generate", "partition", "5", "--proper", "-o", pi5).code());
+        CliRun run = CliRun.morse("homology", pi5, "--coefficients", "3");
+        assertEquals(0, run.code(), run.err());
+        assertTrue(run.out().contains("coefficients F_3 (the field Z/3 of 3 elements)\n    H_0 = F_3\n    H_1 = 0\n"
+                + "    H_2 = F_3^24\n"), run.out());
+        // JSON keeps Betti numbers only
+        assertEquals(List.of(1L, 0L, 24L), CliFiles.betti(CliFiles.homologyJson(pi5, "--coefficients", "3")));
+    }
+
+    @Test
+    void groupsOverTheRationalsArePrintedAsVectorSpaces() {
+        // RP^2 over Z/2: F_2 in every dimension 0..2 (universal coefficients; Hatcher 2002, §3.1, from memory);
+        // over Q only H_0 = Q survives
+        CliRun f2 = CliRun.morse("homology", rp2, "--coefficients", "2");
+        assertTrue(f2.out().contains("    H_0 = F_2\n    H_1 = F_2\n    H_2 = F_2\n"), f2.out());
+        CliRun q = CliRun.morse("homology", rp2, "--coefficients", "Q");
+        assertTrue(q.out().contains("    H_0 = Q\n    H_1 = 0\n    H_2 = 0\n"), q.out());
+    }
+
+    @Test
     @SuppressWarnings("unchecked")
     void everyJsonKeyIsSnakeCase() {
         // the order complex of the square, so that the poset reduction runs and is timed

@@ -36,7 +36,7 @@ public final class ComparisonJsonWriter {
             JsonReportWriter.writeHomology(json, report.shownHomology().groups());
             json.writeStringField("reference_matching", report.referenceMatching());
             json.writeNumberField("morse_lower_bound", report.morseLowerBound());
-            json.writeStringField("morse_lower_bound_over", JsonStyle.ringLabel(report.homology().coefficients()));
+            json.writeStringField("morse_lower_bound_over", report.homology().coefficients().toString());
             JsonStyle.intArray(json, "lower_bound_by_dimension", report.boundByDimension());
             json.writeNumberField("seed", report.seed());
             json.writeObjectFieldStart("timings_ms");

@@ -28,7 +28,7 @@ import java.util.Optional;
  * {@code input}, {@code format} ({@code poset} or {@code simplicial}), {@code reduced},
  * {@code cw_check} ({@code {"cw_poset": bool}}, with {@code "reason": text} when the check gave
  * one, or {@code null} when no check was made), {@code morse_lower_bound} (over the ring
- * {@code morse_lower_bound_over}, Z, Q or Z/p: over a field it counts that field's Betti numbers and
+ * {@code morse_lower_bound_over}, written as {@code coefficients} is: over a field it counts that field's Betti numbers and
  * misses integral torsion) and {@code excess} (critical
  * cells beyond it), {@code rounds} (cells left after each algebraic reduction round), {@code trials}
  * (critical vectors and how often each occurred, when several seeded runs were asked for),
@@ -71,7 +71,7 @@ public final class JsonReportWriter {
             json.writeBooleanField("reduced", report.reduced());
             writeHomology(json, report.homology().groups());
             json.writeNumberField("morse_lower_bound", report.morseLowerBound());
-            json.writeStringField("morse_lower_bound_over", JsonStyle.ringLabel(report.coefficients()));
+            json.writeStringField("morse_lower_bound_over", report.coefficients().toString());
             json.writeNumberField("excess", report.excess());
             writeRounds(json, report.rounds());
             if (!report.trials().isEmpty()) {

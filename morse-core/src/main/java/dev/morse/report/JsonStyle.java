@@ -68,12 +68,12 @@ final class JsonStyle {
         json.writeEndArray();
     }
 
-    /** The ring as reports name it: {@code Z}, {@code Q} or {@code Z/p}. */
+    /** The ring as text reports name it: {@code Z}, {@code Q} or {@code F_p}. */
     static String ringLabel(Coefficients coefficients) {
         return switch (coefficients.ring()) {
             case INTEGERS -> "Z";
             case RATIONALS -> "Q";
-            case PRIME_FIELD -> "Z/" + coefficients.prime();
+            case PRIME_FIELD -> "F_" + coefficients.prime();
         };
     }
 

@@ -79,18 +79,19 @@ public final class TextReportWriter {
                 + (groups.length() == 0 ? "no groups (no cells)" : groups.toString());
     }
 
-    /** A homology group over the given coefficients, such as {@code Z^2 + Z/2}, {@code Q^3} or {@code (Z/2)^2}. */
+    /**
+     * A homology group over the given coefficients: over Z a finitely generated abelian group such
+     * as {@code Z^2 + Z/2}; over a field a vector space, written as the field to the power of its
+     * dimension, {@code Q^3} or {@code F_3^57} (F_p, the field of p elements, common practice), so
+     * that it is never mistaken for torsion.
+     */
     public static String groupText(HomologyGroup group, Coefficients coefficients) {
-        String field = switch (coefficients.ring()) {
-            case INTEGERS -> "Z";
-            case RATIONALS -> "Q";
-            case PRIME_FIELD -> "Z/" + coefficients.prime();
-        };
+        String field = JsonStyle.ringLabel(coefficients);
         StringJoiner parts = new StringJoiner(" + ");
         if (group.betti() == 1) {
             parts.add(field);
         } else if (group.betti() > 1) {
-            parts.add((field.length() > 1 ? "(" + field + ")" : field) + "^" + group.betti());
+            parts.add(field + "^" + group.betti());
         }
         for (BigInteger factor : group.torsion()) {
             parts.add("Z/" + factor);
@@ -200,7 +201,8 @@ public final class TextReportWriter {
         return switch (coefficients.ring()) {
             case INTEGERS -> "Z (integers)";
             case RATIONALS -> "Q (rationals)";
-            case PRIME_FIELD -> "Z/" + coefficients.prime() + " (field of " + coefficients.prime() + " elements)";
+            case PRIME_FIELD -> "F_" + coefficients.prime() + " (the field Z/" + coefficients.prime() + " of "
+                    + coefficients.prime() + " elements)";
         };
     }
 

@@ -112,10 +112,8 @@ public final class ComparisonTextWriter {
             return "0, no cells";
         }
         long total = counts.stream().mapToLong(Number::longValue).sum();
-        StringJoiner byDimension = new StringJoiner(" + ");
-        counts.forEach(c -> byDimension.add(c.toString()));
         return counts.size() == 1 ? total + " in dimension 0"
-                : total + " = " + byDimension + " in dimensions 0.." + (counts.size() - 1);
+                : total + " = " + Counted.terms(counts, " + ") + " in dimensions 0.." + (counts.size() - 1);
     }
 
     private static String spaced(List<Integer> counts) {

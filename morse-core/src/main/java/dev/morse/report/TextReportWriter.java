@@ -57,7 +57,20 @@ public final class TextReportWriter {
         }
         row(text, "homology", (report.reduced() ? "reduced, " : "") + "coefficients " + ringName(report.coefficients()));
         String prefix = report.reduced() ? "~H_" : "H_";
-        for (HomologyGroup group : report.homology().groups()) {
+        List<HomologyGroup> groups = report.homology().groups();
+        for (int i = 0; i < groups.size(); i++) {
+            HomologyGroup group = groups.get(i);
+            int end = i;
+            while (end + 1 < groups.size() && group.isTrivial() && groups.get(end + 1).isTrivial()) {
+                end++;
+            }
+            if (end - i + 1 >= Counted.RUN) {
+                // a long run of zero groups (a long chain reduces to a point, listed up to its top dimension)
+                text.append(String.format(Locale.ROOT, "    %s%d .. %s%d = 0\n", prefix, group.dimension(), prefix,
+                        groups.get(end).dimension()));
+                i = end;
+                continue;
+            }
             text.append(String.format(Locale.ROOT, "    %s%d = %s\n", prefix, group.dimension(),
                     groupText(group, report.coefficients())));
         }
@@ -162,11 +175,9 @@ public final class TextReportWriter {
         if (counts.isEmpty()) {
             return "none";
         }
-        StringJoiner byDimension = new StringJoiner(" + ");
-        counts.forEach(c -> byDimension.add(Long.toString(c.longValue())));
         return counts.size() == 1
                 ? total + " in dimension 0"
-                : total + " = " + byDimension + " in dimensions 0.." + (counts.size() - 1);
+                : total + " = " + Counted.terms(counts, " + ") + " in dimensions 0.." + (counts.size() - 1);
     }
 
     private static String matchingLine(Computation report) {

@@ -111,11 +111,16 @@ final class Failures implements IExecutionExceptionHandler, IParameterExceptionH
         return false;
     }
 
+    /** The longest message line printed; a longer one (a huge label quoted, say) is cut. */
+    static final int MAX_LINE = 1000;
+
     private static String firstLine(String message) {
         if (message == null) {
             return "(no message)";
         }
         int end = message.indexOf('\n');
-        return (end < 0 ? message : message.substring(0, end)).strip();
+        String line = (end < 0 ? message : message.substring(0, end)).strip();
+        return line.length() <= MAX_LINE ? line
+                : line.substring(0, MAX_LINE) + "… (" + (line.length() - MAX_LINE) + " more characters)";
     }
 }

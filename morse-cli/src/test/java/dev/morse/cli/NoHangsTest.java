@@ -97,4 +97,33 @@ class NoHangsTest {
                 + " least 2^30 - 1 = 1,073,741,823 faces with 16,106,127,360 boundary entries, more than one array holds"),
                 run.errLines());
     }
+
+    @Test
+    void aLongCycleIsNamedByAFewOfItsElements() throws IOException {
+        int n = 100_000;
+        StringBuilder text = new StringBuilder("morse-poset 1\n");
+        for (int i = 1; i < n; i++) {
+            text.append('e').append(i).append(": e").append(i - 1).append('\n');
+        }
+        text.append("e0: e").append(n - 1).append('\n');
+        String cycle = Inputs.write(dir, "cycle.poset", text.toString());
+        CliRun run = CliRun.morse("homology", cycle);
+        assertEquals(2, run.code());
+        assertEquals(1, run.errLines().size());
+        String line = run.errLines().get(0);
+        assertTrue(line.contains(": the relations contain a cycle of 100000 elements: "), line);
+        // six elements, the count of the others, the last two, and the first again
+        assertTrue(line.matches(".*: (e[0-9]+ < ){6}… \\(99992 more\\) … < (e[0-9]+ < ){2}e[0-9]+"), line);
+    }
+
+    @Test
+    void aHugeLabelInAMessageIsCut() throws IOException {
+        String label = "x".repeat(5000);
+        String loop = Inputs.write(dir, "self.poset", "morse-poset 1\n" + label + ": " + label + "\n");
+        CliRun run = CliRun.morse("homology", loop);
+        assertEquals(2, run.code());
+        assertEquals(1, run.errLines().size());
+        assertTrue(run.errLines().get(0).length() <= Failures.MAX_LINE + 40, run.err());
+        assertTrue(run.errLines().get(0).endsWith(" more characters)"), run.err());
+    }
 }

@@ -41,11 +41,7 @@ public final class ComparisonTextWriter {
             if (!run.trials().isEmpty()) {
                 text.append(String.format(Locale.ROOT, "\n  %s, %d trials with seeds %d..%d:\n", run.matching(),
                         run.trialCount(), report.seed(), report.seed() + run.trialCount() - 1));
-                for (TrialCount t : run.trials()) {
-                    text.append(String.format(Locale.ROOT, "    critical %-16s total %-8d %s\n",
-                            spaced(t.critical()), t.critical().stream().mapToLong(Integer::longValue).sum(),
-                            t.count() == 1 ? "once" : t.count() + " times"));
-                }
+                text.append(TrialTable.toText(run.trials(), report.morseLowerBound(), "    "));
             }
         }
         text.append("\n  Times are milliseconds. Peak heap is approximate: the sum of the heap pools' peaks while\n"

@@ -52,8 +52,12 @@ public final class TextReportWriter {
             row(text, "round " + round.round(), round.pairsRemoved() + " pairs removed, left "
                     + countsLine(Arrays.stream(round.cellCounts()).boxed().toList()));
         }
-        for (TrialCount trial : report.trials()) {
-            row(text, "trials", trial.count() + " x critical " + countsLine(trial.critical()));
+        if (!report.trials().isEmpty()) {
+            int runs = report.trials().stream().mapToInt(TrialCount::count).sum();
+            row(text, "trials", runs + " runs of " + report.matchingName() + ", " + Counted.of(report.trials().size(),
+                    "vector", "vectors") + " of critical cells by dimension; excess over the bound "
+                    + report.morseLowerBound() + ":");
+            text.append(TrialTable.toText(report.trials(), report.morseLowerBound(), "              "));
         }
         row(text, "homology", (report.reduced() ? "reduced, " : "") + "coefficients " + ringName(report.coefficients()));
         String prefix = report.reduced() ? "~H_" : "H_";

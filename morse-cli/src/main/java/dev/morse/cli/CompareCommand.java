@@ -3,12 +3,14 @@ package dev.morse.cli;
 import dev.morse.engine.ComparisonReport;
 import dev.morse.engine.HeuristicComparison;
 import dev.morse.engine.Request;
+import dev.morse.input.Input;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.report.ComparisonChartSvg;
 import dev.morse.report.ComparisonJsonWriter;
 import dev.morse.report.ComparisonTextWriter;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -71,8 +73,12 @@ final class CompareCommand implements Callable<Integer> {
                 throw new ParameterException(spec.commandLine(), e.getMessage());
             }
         }
-        ComparisonReport report = run.around(spec, () -> HeuristicComparison.run(input.read(spec), request,
-                Optional.ofNullable(matchings), !noOptimum));
+        List<Input> read = new ArrayList<>(1);
+        ComparisonReport report = run.around(spec, () -> {
+            read.add(input.read(spec));
+            return HeuristicComparison.run(read.get(0), request, Optional.ofNullable(matchings), !noOptimum);
+        });
+        Warnings.print(spec, input.warnings(read.get(0)));
         String text = output.json() ? ComparisonJsonWriter.toJson(report) : ComparisonTextWriter.toText(report);
         if (plot != null) {
             OutputFiles.write(plot, ComparisonChartSvg.toSvg(report));

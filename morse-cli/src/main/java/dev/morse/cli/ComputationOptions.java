@@ -5,6 +5,8 @@ import dev.morse.engine.Engines;
 import dev.morse.engine.Request;
 import dev.morse.input.Input;
 import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 
@@ -44,9 +46,13 @@ final class ComputationOptions {
         return run.around(spec, work);
     }
 
-    /** Reads the input and computes, with the progress line. */
+    /** Reads the input and computes, with the progress line; warns of options that did not apply. */
     Computation compute(CommandSpec spec) throws Exception {
         Request request = request(spec);
-        return run.around(spec, () -> Engines.compute(read(spec), request));
+        Computation result = run.around(spec, () -> Engines.compute(read(spec), request));
+        List<String> warnings = new ArrayList<>(input.warnings(result.input()));
+        warnings.addAll(Warnings.matchingOptions(result, matching.name(), runs.trials()));
+        Warnings.print(spec, warnings);
+        return result;
     }
 }

@@ -6,6 +6,9 @@ import dev.morse.engine.Computation;
 import dev.morse.engine.Engines;
 import dev.morse.engine.Request;
 import dev.morse.input.Input;
+import dev.morse.input.PosetInput;
+import dev.morse.inspect.PosetInspector;
+import dev.morse.inspect.PosetSummary;
 import dev.morse.input.InputReaders;
 import dev.morse.report.TextReportWriter;
 import java.io.IOException;
@@ -22,15 +25,17 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code morse demo}: two short stories on invented data, run through the same pipeline as
+ * {@code morse demo}: three short stories on invented data, run through the same pipeline as
  * {@code morse homology}. The inputs live in the jar under {@code demo/}.
  */
-@Command(name = "demo", mixinStandardHelpOptions = true, description = "Shows, on two small invented examples, what morse computes and why.")
+@Command(name = "demo", mixinStandardHelpOptions = true, description = "Shows, on three small invented examples, what morse computes and why.")
 final class DemoCommand implements Callable<Integer> {
     /** The wrapping tile map: a torus cut into 4 x 4 squares, as a face poset. */
     static final String TILE_MAP = "demo/tile-map.poset";
     /** The release plan: a poset of tasks that is not a CW poset. */
     static final String RELEASE_PLAN = "demo/release-plan.poset";
+    /** The crew arrangements: the proper part of a partition lattice, told apart as a wedge of circles. */
+    static final String CREW_SPLIT = "demo/crew-split.poset";
 
     @Spec
     private CommandSpec spec;
@@ -45,7 +50,7 @@ final class DemoCommand implements Callable<Integer> {
         text.append("""
                 morse demo
                 ==========
-                Two short stories on invented data. Each input is a morse-poset file, run through
+                Three short stories on invented data. Each input is a morse-poset file, run through
                 the same steps as 'morse homology FILE'.
 
                 1. A tile map that wraps around
@@ -95,8 +100,29 @@ final class DemoCommand implements Callable<Integer> {
                 db, and back to server), and neither release closes it, since each waits for
                 only two of the three builds.
 
-                Try it on your own files: morse homology FILE [--json]; see morse homology --help.
+                3. Is it a wedge of spheres?
+                ----------------------------
+                A scheduler splits four jobs among crews, and may merge two crews into one. The
+                arrangements, ordered by merging, form a poset; leaving out "one crew per job"
+                and "one crew for all" gives its proper part. A combinatorialist asks whether
+                its order complex is a wedge of spheres, and how many: that number is, up to
+                sign, the Möbius value of the whole poset from bottom to top.
+
                 """, bettiNumbers(plan)));
+        Input crews = InputReaders.parse(CREW_SPLIT, resource(CREW_SPLIT));
+        Computation split = Engines.compute(crews, options.withHomology(options.coefficients(), true));
+        indent(text, TextReportWriter.toText(split));
+        PosetSummary summary = PosetInspector.inspect(((PosetInput) crews).poset());
+        text.append(String.format(Locale.ROOT, """
+
+                Reduced homology %s: only one dimension is nonzero, and the complex is a graph
+                (chains have at most two arrangements), so it is a connected graph with %s
+                independent loops: a wedge of that many circles. The Möbius value from bottom to
+                top is %s, equal to the reduced Euler characteristic (Philip Hall's theorem);
+                'morse inspect FILE' prints it.
+
+                Try it on your own files: morse homology FILE [--json]; see morse homology --help.
+                """, groups(split), split.homology().group(1).betti(), summary.mobius()));
         PrintWriter out = spec.commandLine().getOut();
         out.print(text);
         out.flush();
@@ -127,7 +153,8 @@ final class DemoCommand implements Callable<Integer> {
     private static String groups(Computation report) {
         StringJoiner parts = new StringJoiner(", ");
         for (HomologyGroup group : report.homology().groups()) {
-            parts.add("H_" + group.dimension() + " = " + TextReportWriter.groupText(group, report.coefficients()));
+            parts.add((report.reduced() ? "~H_" : "H_") + group.dimension() + " = "
+                    + TextReportWriter.groupText(group, report.coefficients()));
         }
         return parts.toString();
     }

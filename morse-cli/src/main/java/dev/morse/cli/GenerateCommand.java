@@ -160,7 +160,8 @@ final class GenerateCommand implements Callable<Integer> {
 
     @Command(name = "voxel-block", mixinStandardHelpOptions = true, description = "A solid SIDE^3 block of voxels with straight tunnels and sealed"
             + " cavities: H = Z, Z^tunnels, Z^cavities, 0.")
-    int voxelBlock(@Parameters(paramLabel = "SIDE", description = "Voxels along each axis.") int side,
+    int voxelBlock(@Parameters(paramLabel = "SIDE", description = "Voxels along each axis, at most 1290 (so that SIDE^3"
+                    + " voxels fit an int index).") int side,
             @Option(names = "--tunnels", paramLabel = "T", defaultValue = "0", description = "Tunnels (default 0).")
                     int tunnels,
             @Option(names = "--cavities", paramLabel = "C", defaultValue = "0", description = "Cavities (default 0).")

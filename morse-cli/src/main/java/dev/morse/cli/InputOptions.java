@@ -47,4 +47,9 @@ final class InputOptions {
                 invert, Optional.ofNullable(dims));
         return InputReaders.read(files, image);
     }
+
+    /** Warnings for image options given with an input that is no image; see {@link Warnings}. */
+    java.util.List<String> warnings(Input input) {
+        return Warnings.imageOptions(input, threshold != null, invert);
+    }
 }

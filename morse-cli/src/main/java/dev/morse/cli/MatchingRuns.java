@@ -10,7 +10,7 @@ final class MatchingRuns {
 
     @Option(names = "--trials", paramLabel = "N", defaultValue = "1",
             description = "Run the matching N times with seeds from --seed on and report how often each vector of"
-                    + " critical cells occurred.")
+                    + " critical cells occurred; at most 1,000,000.")
     private int trials;
 
     @Option(names = "--no-verify", description = "Trust the matching without checking that it is acyclic.")

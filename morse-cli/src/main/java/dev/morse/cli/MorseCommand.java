@@ -31,9 +31,9 @@ public final class MorseCommand implements Callable<Integer> {
         try {
             code = newCommandLine().setOut(out).setErr(err).execute(args);
         } catch (OutOfMemoryError e) {
-            // picocli hands only Exceptions to the handlers; Errors arrive here
-            err.println("morse: out of memory; give the JVM more with JAVA_OPTS=-Xmx8g (or larger)");
-            code = Failures.INTERNAL_FAILURE;
+            // Failures turns the commands' Errors into messages; this is for one outside them (parsing, help)
+            err.println(Failures.outOfMemory(Runtime.getRuntime().maxMemory()));
+            code = Failures.BAD_INPUT;
         } catch (Throwable e) {
             err.println("morse: internal error: " + e);
             if (List.of(args).contains("--debug")) {
@@ -53,6 +53,7 @@ public final class MorseCommand implements Callable<Integer> {
     public static CommandLine newCommandLine() {
         Failures failures = new Failures();
         CommandLine line = new CommandLine(new MorseCommand())
+                .setExecutionStrategy(failures)
                 .setExecutionExceptionHandler(failures)
                 .setParameterExceptionHandler(failures);
         withVersion(line, new VersionProvider());

@@ -5,6 +5,7 @@ import dev.morse.io.InputException;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.LinkedHashMap;
 import java.util.Map;
 
 /**
@@ -25,17 +26,38 @@ final class OutputFiles {
         }
     }
 
-    /** Creates {@code directory} if needed and writes every file, by name, into it. */
+    /**
+     * Creates {@code directory} if needed and writes every file, by name, into it: all or none
+     * ({@link AtomicOutput#writeAll}); a directory created here is removed again on failure.
+     */
     static void writeAll(Path directory, Map<String, String> files) {
         if (Files.exists(directory) && !Files.isDirectory(directory)) {
             throw new InputException(directory.toString(), InputException.NO_LINE, "exists and is not a directory");
         }
+        boolean created = !Files.exists(directory);
         try {
             Files.createDirectories(directory);
         } catch (IOException e) {
             throw new InputException(directory.toString(), InputException.NO_LINE,
                     "cannot be created: " + e.getMessage());
         }
-        files.forEach((name, text) -> write(directory.resolve(name), text));
+        Map<Path, AtomicOutput.Content> contents = new LinkedHashMap<>();
+        files.forEach((name, text) -> contents.put(directory.resolve(name), out -> out.write(text)));
+        boolean done = false;
+        try {
+            AtomicOutput.writeAll(contents);
+            done = true;
+        } catch (IOException e) {
+            throw new InputException(directory.toString(), InputException.NO_LINE, "cannot be written: "
+                    + e.getMessage());
+        } finally {
+            if (!done && created) {
+                try {
+                    Files.deleteIfExists(directory);
+                } catch (IOException e) {
+                    // not empty or not ours to remove after all: leave it
+                }
+            }
+        }
     }
 }

@@ -33,4 +33,15 @@ class DemoCommandTest {
         assertTrue(out.contains("cells     8 = 4 + 4 in dimensions 0..1"), out);
         assertTrue(out.contains("Betti numbers [1, 1, 0]"), out);
     }
+
+    @Test
+    void crewSplitIsAWedgeOfSixCircles() {
+        // the proper part of the partition lattice Pi_4 is a wedge of (4-1)! = 6 spheres of dimension
+        // 4 - 3 = 1 (Björner 1980), and mu(Pi_4) = (-1)^3 3! = -6 (Rota 1964); by hand: 13 arrangements,
+        // 3 * 2 + 4 * 3 = 18 comparable pairs, reduced Euler characteristic -1 + 13 - 18 = -6
+        String out = CliRun.morse("demo").out();
+        assertTrue(out.contains("Reduced homology ~H_0 = 0, ~H_1 = Z^6: only one dimension is nonzero"), out);
+        assertTrue(out.contains("a connected graph with 6\n"), out);
+        assertTrue(out.contains("The Möbius value from bottom to\ntop is -6"), out);
+    }
 }

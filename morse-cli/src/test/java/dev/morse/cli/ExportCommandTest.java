@@ -133,4 +133,29 @@ class ExportCommandTest {
         assertEquals(2, run.code());
         assertTrue(run.errLines().get(0).startsWith("morse: Missing required option"), run.err());
     }
+
+    @Test
+    void exportWritesAllFilesOrNone() throws IOException {
+        String file = Inputs.write(dir, "square.poset", Inputs.SQUARE);
+        Path out = Files.createDirectories(dir.resolve("blocked"));
+        // the last file's name is taken by a directory: nothing else may appear either
+        Files.createDirectory(out.resolve("critical-2.txt"));
+        CliRun run = CliRun.morse("export", file, "-o", out.toString());
+        assertEquals(2, run.code());
+        assertEquals("", run.out());
+        assertEquals(List.of(out.resolve("critical-2.txt") + ": is a directory; name a file to write"), run.errLines());
+        try (var left = Files.list(out)) {
+            assertEquals(List.of("critical-2.txt"), left.map(p -> p.getFileName().toString()).toList());
+        }
+    }
+
+    @Test
+    void aFailedRunCreatesNoDirectory() throws IOException {
+        String file = Inputs.write(dir, "square.poset", Inputs.SQUARE);
+        Path out = dir.resolve("fresh");
+        // a bad combination of options stops the run before anything is written: no directory appears
+        CliRun run = CliRun.morse("export", file, "-o", out.toString(), "--complex", "implicit", "--matching", "none");
+        assertEquals(2, run.code());
+        assertTrue(Files.notExists(out));
+    }
 }

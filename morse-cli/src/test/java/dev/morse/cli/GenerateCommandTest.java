@@ -104,7 +104,7 @@ class GenerateCommandTest {
         Path existing = Files.writeString(dir.resolve("keep.poset"), "morse-poset 1\nold\n");
         CliRun run = CliRun.morse("generate", "partition", "0", "-o", existing.toString());
         assertEquals(2, run.code());
-        assertEquals(List.of("morse: n must be in 1..12, got 0", "Try 'morse generate partition --help' for the options."),
+        assertEquals(List.of("morse: n must be in 1..12, got 0 (see 'morse generate partition --help')"),
                 run.errLines());
         assertEquals("", run.out());
         assertEquals("morse-poset 1\nold\n", Files.readString(existing));

@@ -206,7 +206,8 @@ class HomologyCommandTest {
         // the loop is no CW poset and Δ has 3 chains, more than the limit of 2: a segment, contractible
         Map<String, Object> json = json(loop, "--max-stored-chains", "2", "--no-poset-reduction");
         assertEquals("implicit", json.get("engine"));
-        assertEquals("more than 2 chains, too many to store, so the chains are generated on demand",
+        assertEquals("more than 2 chains in the poset as given (no poset reduction), too many to store, so the chains"
+                + " are generated on demand",
                 json.get("engine_reason"));
         assertEquals(ints(1, 0), betti(json));
     }

@@ -112,7 +112,8 @@ class ImageHomologyCommandTest {
         assertTrue(dims.errLines().get(0).contains("give two or three sizes"), dims.err());
         CliRun negative = CliRun.morse("homology", ring, "--threshold", "-1");
         assertEquals(2, negative.code());
-        assertEquals("morse: the threshold must not be negative, not -1", negative.errLines().get(0));
+        assertEquals(List.of("morse: the threshold must not be negative, not -1 (see 'morse homology --help')"),
+                negative.errLines());
     }
 
     @Test

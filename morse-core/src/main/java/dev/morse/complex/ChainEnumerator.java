@@ -7,6 +7,7 @@ import it.unimi.dsi.fastutil.ints.IntArrayList;
 import it.unimi.dsi.fastutil.ints.IntArrays;
 import it.unimi.dsi.fastutil.longs.LongArrayList;
 import java.util.Arrays;
+import java.util.Locale;
 
 /**
  * Lists every nonempty chain of a poset, dimension by dimension, and the simplicial boundary of
@@ -122,6 +123,7 @@ final class ChainEnumerator {
         perDimension.add(n);
         long total = n;
         long entries = 0;
+        String refusal = null;
         for (int d = 1; n > 0; d++) {
             long[] current = new long[n];
             long sum = 0;
@@ -137,17 +139,23 @@ final class ChainEnumerator {
                 break;
             }
             total = CellLimits.saturatedAdd(total, sum);
-            long width = CellLimits.saturatedMultiply(sum, d + 1);
-            entries = CellLimits.saturatedAdd(entries, width);
-            if (total > limit) {
-                throw tooMany(d, total);
+            // past the limit, the remaining dimensions are still counted (one pass each over the
+            // comparable pairs) so that the refusal states the whole size, not a partial sum
+            if (refusal == null) {
+                entries = CellLimits.saturatedAdd(entries, CellLimits.saturatedMultiply(sum, d + 1));
+                if (total > limit) {
+                    refusal = String.format(Locale.ROOT, "more than the limit of %,d", limit);
+                } else if (entries > CellLimits.MAX_ARRAY) {
+                    refusal = "and more boundary entries than one array holds";
+                }
+                perDimension.add(sum);
             }
-            if (entries > CellLimits.MAX_ARRAY) {
-                throw new IllegalStateException("the order complex has " + total
-                        + " cells and more boundary entries than one array holds");
-            }
-            perDimension.add(sum);
             previous = current;
+        }
+        if (refusal != null) {
+            throw new IllegalStateException(String.format(Locale.ROOT, "the order complex would have %s cells in all"
+                    + " dimensions, %s", total == Long.MAX_VALUE ? "more than 2^63"
+                    : String.format(Locale.ROOT, "%,d", total), refusal));
         }
         counts = perDimension.toLongArray();
     }

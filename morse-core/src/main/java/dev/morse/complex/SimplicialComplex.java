@@ -54,6 +54,14 @@ public final class SimplicialComplex extends StoredComplex {
             throw new IllegalStateException("a listed face has " + largest + " vertices, so the complex has at least 2^"
                     + largest + " - 1 faces, more than the limit of " + limit);
         }
+        // the faces of one k-vertex face alone have k·2^(k-1) boundary entries (each of the 2^k subsets
+        // of size j has j facets): refuse before enumerating them when one array cannot hold those
+        long entries = (long) largest << Math.max(0, largest - 1);
+        if (entries > CellLimits.MAX_ARRAY) {
+            throw new IllegalStateException(String.format(java.util.Locale.ROOT, "a listed face has %d vertices, so the"
+                    + " complex has at least 2^%d - 1 = %,d faces with %,d boundary entries, more than one array holds",
+                    largest, largest, (1L << largest) - 1, entries));
+        }
         TupleTable[] tables = faceTables(facets, largest, limit);
         int top = largest - 1;
         int[] counts = new int[largest];

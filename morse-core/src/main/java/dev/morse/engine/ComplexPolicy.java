@@ -136,11 +136,16 @@ public final class ComplexPolicy {
             total = Long.MAX_VALUE;
         }
         if (total > limit) {
-            return implicit(shrunk, counts, String.format(Locale.ROOT, "more than %,d chains, too many to store, so"
-                    + " the chains are generated on demand", limit), cw, top, start);
+            return implicit(shrunk, counts, String.format(Locale.ROOT, "more than %,d chains %s, too many to store,"
+                    + " so the chains are generated on demand", limit, countedOn(shrunk)), cw, top, start);
         }
-        return storedOrder(shrunk, request, String.format(Locale.ROOT, "%,d %s, at most the %,d stored", total,
-                total == 1 ? "chain" : "chains", limit), cw, top, start);
+        return storedOrder(shrunk, request, String.format(Locale.ROOT, "%,d %s %s, at most the %,d stored", total,
+                total == 1 ? "chain" : "chains", countedOn(shrunk), limit), cw, top, start);
+    }
+
+    /** Which poset the chains were counted on, for the reason line: the chain counts differ by a lot. */
+    private static String countedOn(Shrunk shrunk) {
+        return shrunk.stats().isPresent() ? "after the poset reduction" : "in the poset as given (no poset reduction)";
     }
 
     private static void requireOwnMatching(PosetInput input, Request request) {

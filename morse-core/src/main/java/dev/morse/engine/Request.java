@@ -43,18 +43,25 @@ public record Request(ComplexChoice complex, Coefficients coefficients, boolean 
     public static final long DEFAULT_STORED_CHAIN_LIMIT = 1_000_000;
 
     /**
+     * The most seeded trials one request may ask for. Each trial is a whole matching of the complex,
+     * so a million already means hours on anything but a toy; more is a typing slip, refused rather
+     * than left running.
+     */
+    public static final int MAX_TRIALS = 1_000_000;
+
+    /**
      * Validates.
      *
-     * @throws IllegalArgumentException for an unknown matching name (listing the known ones), fewer
-     *     than one trial, or a limit out of range
+     * @throws IllegalArgumentException for an unknown matching name (listing the known ones), trials
+     *     outside 1..{@link #MAX_TRIALS}, or a limit out of range
      */
     public Request {
         Objects.requireNonNull(complex, "complex");
         Objects.requireNonNull(coefficients, "coefficients");
         Objects.requireNonNull(elementOrder, "elementOrder");
         matching = requireKnownMatching(matching);
-        if (trials < 1) {
-            throw new IllegalArgumentException("trials must be at least 1");
+        if (trials < 1 || trials > MAX_TRIALS) {
+            throw new IllegalArgumentException("trials must be in 1.." + MAX_TRIALS + ", got " + trials);
         }
         if (storedChainLimit < 0 || storedChainLimit > 1L << 60) {
             throw new IllegalArgumentException("the stored chain limit must lie in 0..2^60");

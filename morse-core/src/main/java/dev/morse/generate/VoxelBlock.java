@@ -21,6 +21,9 @@ import java.util.List;
  * coordinates, {@code c<x>.<y>.<z>}, odd coordinates being the directions it spans.
  */
 public final class VoxelBlock {
+    /** The largest side whose cube of voxels, {@code side^3}, still fits an int index: 1290^3 = 2,146,689,000. */
+    public static final int MAX_SIDE = 1290;
+
     private final int n;
     private final int tunnels;
     private final int cavities;
@@ -74,10 +77,12 @@ public final class VoxelBlock {
     /**
      * A block of side {@code n} with the given tunnels and cavities.
      *
-     * @throws IllegalArgumentException if they do not fit with walls of at least one voxel between them
+     * @throws IllegalArgumentException if the side is not in 1..{@link #MAX_SIDE}, or the holes do not fit with
+     *     walls of at least one voxel between them
      */
     public static VoxelBlock of(int n, int tunnels, int cavities) {
-        if (n < 1 || tunnels < 0 || cavities < 0) {
+        Sizes.inRange("side", n, 1, MAX_SIDE);
+        if (tunnels < 0 || cavities < 0) {
             throw new IllegalArgumentException("side must be positive, counts non-negative");
         }
         int slots = Math.max(0, (n - 3) / 3);

@@ -46,11 +46,18 @@ public record Coefficients(Ring ring, int prime) {
         if (t.equals("Q")) {
             return RATIONALS;
         }
+        BigInteger number;
         try {
-            return modulo(Integer.parseInt(t));
+            number = new BigInteger(t);
         } catch (NumberFormatException e) {
             throw new IllegalArgumentException("coefficients must be Z, Q or a prime, not '" + text + "'");
         }
+        // the field's elements live in ints and their products in longs (ModularElimination)
+        if (number.bitLength() > 31) {
+            throw new IllegalArgumentException("prime coefficients must be below 2^31 (at most " + Integer.MAX_VALUE
+                    + "), not " + t);
+        }
+        return modulo(number.intValueExact());
     }
 
     /** Whether torsion can appear (only over the integers). */

@@ -160,8 +160,11 @@ public final class ImageInput {
     private static LoadedImage raw(Path file, VolumeSize size, ImageOptions options) throws IOException {
         String source = file.toString();
         if (!Files.isRegularFile(file)) {
-            throw new InputException(source, InputException.NO_LINE,
-                    Files.isDirectory(file) ? "is a directory, not a raw volume" : "no such file");
+            // a device such as /dev/zero, or a pipe, would be read without end or block
+            throw new InputException(source, InputException.NO_LINE, Files.isDirectory(file)
+                    ? "is a directory, not a raw volume"
+                    : Files.exists(file) ? "is not a regular file (a pipe or a device?); save the input to a file first"
+                    : "no such file");
         }
         long bytes = Files.size(file);
         if (bytes != size.voxels()) {

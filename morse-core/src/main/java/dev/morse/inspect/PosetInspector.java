@@ -58,6 +58,17 @@ public final class PosetInspector {
         String thin = ThinCheck.failure(poset);
         StrictDownSets downSets;
         try {
+            // each element lies above at least its height many others (a longest chain below it), so
+            // their sum bounds the comparable pairs from below at no cost: a long chain is refused at
+            // once instead of after filling a GiB of down-sets
+            long atLeast = 0;
+            for (int x = 0; x < n; x++) {
+                atLeast += poset.height(x);
+            }
+            if (atLeast > maxPairs) {
+                throw new IllegalStateException("the poset has at least " + atLeast
+                        + " comparable pairs (each element lies above at least its height many)");
+            }
             downSets = StrictDownSets.of(poset, maxPairs);
         } catch (IllegalStateException tooMany) {
             return new PosetSummary(n, poset.coverCount(), minimal, maximal, rankSizes, poset.isGraded(), thin, verdict,

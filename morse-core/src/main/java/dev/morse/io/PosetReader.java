@@ -113,12 +113,23 @@ public final class PosetReader {
         return false;
     }
 
+    /** The most elements of a cycle an error names. */
+    private static final int CYCLE_SHOWN = 8;
+
     private static InputException cycleError(OrderCycleException e, PosetBuilder builder, String source) {
         int[] cycle = e.cycle();
         StringBuilder text = new StringBuilder("the relations contain a cycle of ")
                 .append(cycle.length).append(" elements: ");
-        for (int x : cycle) {
-            text.append(builder.label(x)).append(" < ");
+        // a long cycle is named by its first and last few elements, so that the message stays one short line
+        int shown = cycle.length <= CYCLE_SHOWN ? cycle.length : CYCLE_SHOWN - 2;
+        for (int i = 0; i < shown; i++) {
+            text.append(builder.label(cycle[i])).append(" < ");
+        }
+        if (shown < cycle.length) {
+            text.append("… (").append(cycle.length - CYCLE_SHOWN).append(" more) … < ");
+            for (int i = cycle.length - 2; i < cycle.length; i++) {
+                text.append(builder.label(cycle[i])).append(" < ");
+            }
         }
         text.append(builder.label(cycle[0]));
         return new InputException(source, e.tag(), text.toString());

@@ -14,7 +14,7 @@ import java.util.function.IntConsumer;
  * which one search of the smaller side decides. Heights of the original poset still increase
  * along every cover, so they bound the searches. Not thread-safe.
  *
- * <p>Memory: about 40 bytes per element (lists, heights, flags, search stamps and stack) plus
+ * <p>Memory: about 48 bytes per element (lists, heights, flags, search stamps, stack and cursors) plus
  * about 16 bytes per cover, both directions.
  */
 final class HasseWorkspace {
@@ -25,6 +25,8 @@ final class HasseWorkspace {
     private final boolean[] removed;
     private final int[] stamp;
     private final int[] stack;
+    private final int[] cursor;
+    private final int[] target;
     private int epoch;
     private int alive;
     private int minimal;
@@ -39,6 +41,8 @@ final class HasseWorkspace {
         removed = new boolean[n];
         stamp = new int[n];
         stack = new int[n];
+        cursor = new int[n];
+        target = new int[n];
         alive = n;
         for (int x = 0; x < n; x++) {
             height[x] = poset.height(x);
@@ -157,7 +161,12 @@ final class HasseWorkspace {
         }
     }
 
-    /** For each y below: marks everything above y (below the highest z), then links y to the z not reached. */
+    /**
+     * For each y below: searches upward from y (below the highest z) until every z is found to have a
+     * lower cover strictly above y, then links y to the z not found. The search goes depth first and
+     * stops as soon as all are found, so removing one of many parallel elements (one bottom, 10^5
+     * atoms, one top) costs a step or two, not a walk over all the others.
+     */
     private void bridgeFromBelow(int[] below, int[] above) {
         int ceiling = 0;
         for (int z : above) {
@@ -165,24 +174,33 @@ final class HasseWorkspace {
         }
         for (int y : below) {
             int mark = ++epoch;
+            for (int z : above) {
+                target[z] = mark;
+            }
+            int missing = above.length;
             int top = 0;
-            stack[top++] = y;
-            while (top > 0) {
-                int v = stack[--top];
-                for (int i = 0; i < upper.size(v); i++) {
-                    int w = upper.get(v, i);
-                    if (stamp[w] != mark && height[w] < ceiling) {
-                        stamp[w] = mark;
-                        stack[top++] = w;
-                    }
+            stack[top] = y;
+            cursor[top++] = 0;
+            while (top > 0 && missing > 0) {
+                int v = stack[top - 1];
+                if (cursor[top - 1] == upper.size(v)) {
+                    top--;
+                    continue;
+                }
+                int w = upper.get(v, cursor[top - 1]++);
+                if (v != y && target[w] == mark) {
+                    // v lies strictly between y and w: w is no new cover of y
+                    target[w] = -mark;
+                    missing--;
+                }
+                if (stamp[w] != mark && height[w] < ceiling) {
+                    stamp[w] = mark;
+                    stack[top] = w;
+                    cursor[top++] = 0;
                 }
             }
             for (int z : above) {
-                boolean between = false;
-                for (int i = 0; i < lower.size(z) && !between; i++) {
-                    between = stamp[lower.get(z, i)] == mark;
-                }
-                if (!between) {
+                if (target[z] == mark) {
                     link(y, z);
                 }
             }

@@ -43,6 +43,7 @@ public final class ComparisonJsonWriter {
                 writeOptimum(json, report.optimum().get());
             }
             json.writeNumberField("morse_lower_bound", report.morseLowerBound());
+            json.writeStringField("morse_lower_bound_over", report.homology().coefficients().toString());
             JsonStyle.intArray(json, "lower_bound_by_dimension", report.boundByDimension());
             json.writeNumberField("seed", report.seed());
             json.writeObjectFieldStart("timings_ms");

@@ -34,7 +34,8 @@ public final class ComparisonTextWriter {
         row(text, "cells", counted(report.cells()));
         row(text, "homology", homologyLine(report) + " (by " + report.referenceMatching()
                 + (report.runs().size() > 1 ? "; every matching agrees)" : ")"));
-        row(text, "bound", "Morse lower bound " + counted(report.boundByDimension()));
+        row(text, "bound", TextReportWriter.boundOver(report.homology().coefficients()) + " "
+                + counted(report.boundByDimension()) + TextReportWriter.boundCaveat(report.homology().coefficients()));
         report.optimum().ifPresent(o -> row(text, "optimum", optimumLine(o)));
         text.append('\n');
         table(text, report);
@@ -42,11 +43,7 @@ public final class ComparisonTextWriter {
             if (!run.trials().isEmpty()) {
                 text.append(String.format(Locale.ROOT, "\n  %s, %d trials with seeds %d..%d:\n", run.matching(),
                         run.trialCount(), report.seed(), report.seed() + run.trialCount() - 1));
-                for (TrialCount t : run.trials()) {
-                    text.append(String.format(Locale.ROOT, "    critical %-16s total %-8d %s\n",
-                            spaced(t.critical()), t.critical().stream().mapToLong(Integer::longValue).sum(),
-                            t.count() == 1 ? "once" : t.count() + " times"));
-                }
+                text.append(TrialTable.toText(run.trials(), report.morseLowerBound(), "    "));
             }
         }
         text.append("\n  Times are milliseconds. Peak heap is approximate: the sum of the heap pools' peaks while\n"
@@ -130,10 +127,8 @@ public final class ComparisonTextWriter {
             return "0, no cells";
         }
         long total = counts.stream().mapToLong(Number::longValue).sum();
-        StringJoiner byDimension = new StringJoiner(" + ");
-        counts.forEach(c -> byDimension.add(c.toString()));
         return counts.size() == 1 ? total + " in dimension 0"
-                : total + " = " + byDimension + " in dimensions 0.." + (counts.size() - 1);
+                : total + " = " + Counted.terms(counts, " + ") + " in dimensions 0.." + (counts.size() - 1);
     }
 
     private static String spaced(List<Integer> counts) {

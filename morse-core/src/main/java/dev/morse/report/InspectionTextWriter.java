@@ -108,9 +108,7 @@ public final class InspectionTextWriter {
     }
 
     private static String joined(List<? extends Number> values, String separator) {
-        StringJoiner j = new StringJoiner(separator);
-        values.forEach(v -> j.add(v.toString()));
-        return j.toString();
+        return Counted.terms(values, separator);
     }
 
     private static BigInteger sum(List<? extends Number> values) {

@@ -28,7 +28,9 @@ import java.util.Optional;
  * ({@code complex, cells, matching, critical, coefficients, homology}) and these of ours:
  * {@code input}, {@code format} ({@code poset} or {@code simplicial}), {@code reduced},
  * {@code cw_check} ({@code {"cw_poset": bool}}, with {@code "reason": text} when the check gave
- * one, or {@code null} when no check was made), {@code morse_lower_bound} and {@code excess} (critical
+ * one, or {@code null} when no check was made), {@code morse_lower_bound} (over the ring
+ * {@code morse_lower_bound_over}, written as {@code coefficients} is: over a field it counts that field's Betti numbers and
+ * misses integral torsion) and {@code excess} (critical
  * cells beyond it), {@code rounds} (cells left after each algebraic reduction round), {@code trials}
  * (critical vectors and how often each occurred, when several seeded runs were asked for),
  * {@code engine} (whether the cells were stored, {@code explicit}, or, for an order complex,
@@ -92,6 +94,7 @@ public final class JsonReportWriter {
         json.writeBooleanField("reduced", report.reduced());
         writeHomology(json, report.homology().groups());
         json.writeNumberField("morse_lower_bound", report.morseLowerBound());
+        json.writeStringField("morse_lower_bound_over", report.coefficients().toString());
         json.writeNumberField("excess", report.excess());
         writeRounds(json, report.rounds());
         if (!report.trials().isEmpty()) {
@@ -227,8 +230,7 @@ public final class JsonReportWriter {
     private static void writeTimings(JsonGenerator json, List<PhaseTiming> timings) throws IOException {
         json.writeObjectFieldStart("timings_ms");
         for (PhaseTiming timing : timings) {
-            json.writeFieldName(timing.phase());
-            json.writeNumber(BigDecimal.valueOf(timing.milliseconds()).setScale(TIMING_DECIMALS, RoundingMode.HALF_UP));
+            JsonStyle.millis(json, timing.phase(), timing.milliseconds());
         }
         json.writeEndObject();
     }

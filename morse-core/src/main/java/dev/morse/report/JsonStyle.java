@@ -1,5 +1,6 @@
 package dev.morse.report;
 
+import dev.morse.homology.Coefficients;
 import dev.morse.io.TextOutput;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
@@ -67,9 +68,26 @@ final class JsonStyle {
         json.writeEndArray();
     }
 
-    /** Milliseconds with three decimals. */
+    /** The ring as text reports name it: {@code Z}, {@code Q} or {@code F_p}. */
+    static String ringLabel(Coefficients coefficients) {
+        return switch (coefficients.ring()) {
+            case INTEGERS -> "Z";
+            case RATIONALS -> "Q";
+            case PRIME_FIELD -> "F_" + coefficients.prime();
+        };
+    }
+
+    /**
+     * A name shown to people (a phase such as "poset reduction") as a JSON key: lower case, words
+     * joined by underscores, as every key of our JSON is.
+     */
+    static String key(String name) {
+        return name.strip().toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9]+", "_");
+    }
+
+    /** Milliseconds with three decimals, under the phase's name as a snake_case key. */
     static void millis(JsonGenerator json, String field, double milliseconds) throws IOException {
-        json.writeFieldName(field);
+        json.writeFieldName(key(field));
         json.writeNumber(BigDecimal.valueOf(milliseconds).setScale(TIMING_DECIMALS, RoundingMode.HALF_UP));
     }
 }

@@ -103,17 +103,35 @@ public final class TextReportWriter {
         row(text, "cells", countsLine(report.cells()));
         row(text, "matching", matchingLine(report));
         report.implicitRun().ifPresent(run -> row(text, "walk", walkLine(run)));
-        row(text, "bound", "Morse lower bound " + report.morseLowerBound() + ", excess " + report.excess());
+        row(text, "bound", boundOver(report.coefficients()) + " " + report.morseLowerBound() + ", excess "
+                + report.excess() + boundCaveat(report.coefficients()));
         for (ReductionRound round : report.rounds()) {
             row(text, "round " + round.round(), round.pairsRemoved() + " pairs removed, left "
                     + countsLine(Arrays.stream(round.cellCounts()).boxed().toList()));
         }
-        for (TrialCount trial : report.trials()) {
-            row(text, "trials", trial.count() + " x critical " + countsLine(trial.critical()));
+        if (!report.trials().isEmpty()) {
+            int runs = report.trials().stream().mapToInt(TrialCount::count).sum();
+            row(text, "trials", runs + " runs of " + report.matchingName() + ", " + Counted.of(report.trials().size(),
+                    "vector", "vectors") + " of critical cells by dimension; excess over the bound "
+                    + report.morseLowerBound() + ":");
+            text.append(TrialTable.toText(report.trials(), report.morseLowerBound(), "              "));
         }
         row(text, "homology", (report.reduced() ? "reduced, " : "") + "coefficients " + ringName(report.coefficients()));
         String prefix = report.reduced() ? "~H_" : "H_";
-        for (HomologyGroup group : report.homology().groups()) {
+        List<HomologyGroup> groups = report.homology().groups();
+        for (int i = 0; i < groups.size(); i++) {
+            HomologyGroup group = groups.get(i);
+            int end = i;
+            while (end + 1 < groups.size() && group.isTrivial() && groups.get(end + 1).isTrivial()) {
+                end++;
+            }
+            if (end - i + 1 >= Counted.RUN) {
+                // a long run of zero groups (a long chain reduces to a point, listed up to its top dimension)
+                text.append(String.format(Locale.ROOT, "    %s%d .. %s%d = 0\n", prefix, group.dimension(), prefix,
+                        groups.get(end).dimension()));
+                i = end;
+                continue;
+            }
             text.append(String.format(Locale.ROOT, "    %s%d = %s\n", prefix, group.dimension(),
                     groupText(group, report.coefficients())));
         }
@@ -135,18 +153,19 @@ public final class TextReportWriter {
                 + (groups.length() == 0 ? "no groups (no cells)" : groups.toString());
     }
 
-    /** A homology group over the given coefficients, such as {@code Z^2 + Z/2}, {@code Q^3} or {@code (Z/2)^2}. */
+    /**
+     * A homology group over the given coefficients: over Z a finitely generated abelian group such
+     * as {@code Z^2 + Z/2}; over a field a vector space, written as the field to the power of its
+     * dimension, {@code Q^3} or {@code F_3^57} (F_p, the field of p elements, common practice), so
+     * that it is never mistaken for torsion.
+     */
     public static String groupText(HomologyGroup group, Coefficients coefficients) {
-        String field = switch (coefficients.ring()) {
-            case INTEGERS -> "Z";
-            case RATIONALS -> "Q";
-            case PRIME_FIELD -> "Z/" + coefficients.prime();
-        };
+        String field = JsonStyle.ringLabel(coefficients);
         StringJoiner parts = new StringJoiner(" + ");
         if (group.betti() == 1) {
             parts.add(field);
         } else if (group.betti() > 1) {
-            parts.add((field.length() > 1 ? "(" + field + ")" : field) + "^" + group.betti());
+            parts.add(field + "^" + group.betti());
         }
         for (BigInteger factor : group.torsion()) {
             parts.add("Z/" + factor);
@@ -217,11 +236,9 @@ public final class TextReportWriter {
         if (counts.isEmpty()) {
             return "none";
         }
-        StringJoiner byDimension = new StringJoiner(" + ");
-        counts.forEach(c -> byDimension.add(Long.toString(c.longValue())));
         return counts.size() == 1
                 ? total + " in dimension 0"
-                : total + " = " + byDimension + " in dimensions 0.." + (counts.size() - 1);
+                : total + " = " + Counted.terms(counts, " + ") + " in dimensions 0.." + (counts.size() - 1);
     }
 
     private static String matchingLine(Computation report) {
@@ -237,11 +254,27 @@ public final class TextReportWriter {
                 run.search().facets(), run.search().skippedSubtrees(), run.search().defectiveFacets());
     }
 
+    /**
+     * "Morse lower bound", with the field it was computed over unless that is Z. Over a field the
+     * bound counts Betti numbers over that field; integral torsion, which a field does not see
+     * (Z/2 is invisible over Q), can only raise it (Forman 1998: the bound over Z is
+     * Σ β_d + t_d + t_(d−1)).
+     */
+    static String boundOver(Coefficients coefficients) {
+        return coefficients.hasTorsion() ? "Morse lower bound" : "Morse lower bound over " + JsonStyle.ringLabel(coefficients);
+    }
+
+    /** Why a bound over a field may be lower than the matching can reach. */
+    static String boundCaveat(Coefficients coefficients) {
+        return coefficients.hasTorsion() ? "" : " (integral torsion, not seen over a field, may raise the bound)";
+    }
+
     private static String ringName(Coefficients coefficients) {
         return switch (coefficients.ring()) {
             case INTEGERS -> "Z (integers)";
             case RATIONALS -> "Q (rationals)";
-            case PRIME_FIELD -> "Z/" + coefficients.prime() + " (field of " + coefficients.prime() + " elements)";
+            case PRIME_FIELD -> "F_" + coefficients.prime() + " (the field Z/" + coefficients.prime() + " of "
+                    + coefficients.prime() + " elements)";
         };
     }
 

@@ -37,9 +37,10 @@ class ImplicitChoiceTest {
         Computation report = Runs.run("loop.poset", LOOP, DEFAULTS.withPosetReduction(false));
         assertEquals(ComplexKind.ORDER, report.complexKind());
         assertFalse(report.plan().isImplicit());
-        assertEquals("3 chains, at most the 1,000,000 stored", report.reason());
+        assertEquals("3 chains in the poset as given (no poset reduction), at most the 1,000,000 stored",
+                report.reason());
         // the poset reduction leaves one point (a beat point goes), and the count is of what is left
-        assertEquals("1 chain, at most the 1,000,000 stored",
+        assertEquals("1 chain after the poset reduction, at most the 1,000,000 stored",
                 Runs.run("loop.poset", LOOP, DEFAULTS).reason());
     }
 
@@ -48,8 +49,8 @@ class ImplicitChoiceTest {
         Computation report = Runs.run("pi5.poset", PI5, storingAtMost(100));
         assertEquals(ComplexKind.ORDER, report.complexKind());
         assertTrue(report.plan().isImplicit());
-        assertEquals("more than 100 chains, too many to store, so the chains are generated on demand",
-                report.reason());
+        assertEquals("more than 100 chains after the poset reduction, too many to store, so the chains are generated"
+                + " on demand", report.reason());
         assertEquals(List.of(50L, 205L, 180L), report.cells());
         // one vertex and the 24 falling chains: the Morse lower bound 1 + 24 (Forman 1998)
         assertEquals(List.of(1, 0, 24), report.critical());

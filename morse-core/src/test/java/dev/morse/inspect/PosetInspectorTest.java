@@ -130,7 +130,16 @@ class PosetInspectorTest {
         PosetSummary s = PosetInspector.inspect(BooleanLattice.properPart(4), 10);
         assertFalse(s.chainsCounted());
         assertNull(s.mobius());
-        assertEquals("not counted: the poset has more than 10 comparable pairs, more than this inspection holds",
+        // the heights alone (4 atoms of height 0, 6 of height 1, 4 of height 2) give at least 14 pairs
+        assertEquals("not counted: the poset has at least 14 comparable pairs (each element lies above at least its"
+                + " height many), more than this inspection holds", s.chainsSkipped());
+    }
+
+    @Test
+    void pairsBeyondTheHeightBoundAreFoundByTheDownSets() {
+        // 36 comparable pairs (12 of each of the three kinds of rank pairs), over 20; the height bound 14 is not
+        PosetSummary s = PosetInspector.inspect(BooleanLattice.properPart(4), 20);
+        assertEquals("not counted: the poset has more than 20 comparable pairs, more than this inspection holds",
                 s.chainsSkipped());
     }
 }

@@ -68,7 +68,7 @@ class JsonReportWriterTest {
     void extraFieldsDescribeTheRun() {
         Map<String, Object> json = json(kleinBottle());
         assertEquals(List.of("input", "format", "complex", "engine", "cells", "matching", "critical", "coefficients",
-                "reduced", "homology", "morse_lower_bound", "excess", "rounds", "cw_check", "timings_ms"),
+                "reduced", "homology", "morse_lower_bound", "morse_lower_bound_over", "excess", "rounds", "cw_check", "timings_ms"),
                 List.copyOf(json.keySet()));
         assertEquals("klein.simplicial", json.get("input"));
         assertEquals("simplicial", json.get("format"));

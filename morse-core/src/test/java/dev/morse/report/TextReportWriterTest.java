@@ -32,8 +32,8 @@ class TextReportWriterTest {
         HomologyGroup h1 = HomologyGroup.free(1, 2);
         assertEquals("Z^2", TextReportWriter.groupText(h1, Coefficients.INTEGERS));
         assertEquals("Q^2", TextReportWriter.groupText(h1, Coefficients.RATIONALS));
-        assertEquals("(Z/3)^2", TextReportWriter.groupText(h1, Coefficients.modulo(3)));
-        assertEquals("Z/3", TextReportWriter.groupText(HomologyGroup.free(2, 1), Coefficients.modulo(3)));
+        assertEquals("F_3^2", TextReportWriter.groupText(h1, Coefficients.modulo(3)));
+        assertEquals("F_3", TextReportWriter.groupText(HomologyGroup.free(2, 1), Coefficients.modulo(3)));
         assertEquals("0", TextReportWriter.groupText(HomologyGroup.free(2, 0), Coefficients.RATIONALS));
         assertEquals("Z^3 + Z/2 + Z/2", TextReportWriter.groupText(
                 new HomologyGroup(1, 3, List.of(BigInteger.TWO, BigInteger.TWO)), Coefficients.INTEGERS));

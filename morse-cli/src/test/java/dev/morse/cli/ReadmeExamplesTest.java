@@ -1,0 +1,47 @@
+package dev.morse.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.junit.jupiter.api.Test;
+
+/** The example files the README names exist, and give the homology it shows. */
+class ReadmeExamplesTest {
+    /** Tests run in morse-cli/; the README is one level up. */
+    private static final Path ROOT = Path.of("..");
+
+    @Test
+    void everyExampleFileTheReadmeNamesExists() throws IOException {
+        String readme = Files.readString(ROOT.resolve("README.md"));
+        Matcher m = Pattern.compile("docs/examples/[A-Za-z0-9_.-]+").matcher(readme);
+        int found = 0;
+        while (m.find()) {
+            assertTrue(Files.isRegularFile(ROOT.resolve(m.group())), m.group());
+            found++;
+        }
+        assertTrue(found >= 3, "the README names its example files");
+    }
+
+    @Test
+    void theExamplesHaveTheirKnownHomology() {
+        // a circle: Z, Z (common practice)
+        assertEquals(List.of(1L, 1L), CliFiles.betti(json("circle.poset")));
+        // RP^2: Z, Z/2, 0 (Hatcher 2002, Example 2.42, from memory)
+        Map<String, Object> rp2 = json("rp2.simplicial");
+        assertEquals(List.of(1L, 0L, 0L), CliFiles.betti(rp2));
+        assertEquals(List.of(2L), CliFiles.torsion(rp2, 1));
+        // a ring of pixels is an annulus: Z, Z, 0
+        assertEquals(List.of(1L, 1L, 0L), CliFiles.betti(json("ring.pbm")));
+    }
+
+    private static Map<String, Object> json(String name) {
+        return CliFiles.homologyJson(ROOT.resolve("docs/examples").resolve(name).toString());
+    }
+}

@@ -1,5 +1,7 @@
 package dev.morse.engine;
 
+import dev.morse.generate.Triangulations;
+import dev.morse.io.SimplicialWriter;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -17,19 +19,7 @@ import org.junit.jupiter.api.Test;
 
 class HeuristicComparisonTest {
     /** The 6-vertex triangulation of RP^2 (REFERENCES.md): f = (6, 15, 10), H = Z, Z/2, 0. */
-    static final String RP2 = """
-            morse-simplicial 1
-            1 2 3
-            1 3 4
-            1 4 5
-            1 5 6
-            1 2 6
-            2 3 5
-            3 4 6
-            4 5 2
-            5 6 3
-            6 2 4
-            """;
+    static final String RP2 = SimplicialWriter.toText(Triangulations.projectivePlane6());
 
     private static ComparisonReport compare(String text, List<String> matchings, int trials) {
         return HeuristicComparison.run(InputReaders.parse("rp2.simplicial", text),

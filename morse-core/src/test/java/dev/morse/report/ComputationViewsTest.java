@@ -1,5 +1,7 @@
 package dev.morse.report;
 
+import dev.morse.generate.Triangulations;
+import dev.morse.io.SimplicialWriter;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -17,19 +19,7 @@ import org.junit.jupiter.api.Test;
 /** Exports and pictures are views of one computation: they reuse what it kept and never run again. */
 class ComputationViewsTest {
     /** The 6-vertex triangulation of RP^2 (common practice): H_1 = Z/2 (Hatcher 2002, Example 2.42). */
-    private static final String RP2 = """
-            morse-simplicial 1
-            1 2 3
-            1 3 4
-            1 4 5
-            1 5 6
-            1 2 6
-            2 3 5
-            3 4 6
-            4 5 2
-            5 6 3
-            6 2 4
-            """;
+    private static final String RP2 = SimplicialWriter.toText(Triangulations.projectivePlane6());
     /** Two minima below two maxima: the face poset of a circle of two vertices and two edges; Δ is a circle of four edges. */
     private static final String BOWTIE = "morse-poset 1\na\nb\nc: a b\nd: a b\n";
 

@@ -9,7 +9,7 @@ import java.util.Set;
 
 /**
  * Bing's house with two rooms (Bing, "Some aspects of the topology of 3-manifolds related to the
- * Poincaré conjecture", Lectures on Modern Mathematics II, 1964; pictured in Hatcher, Algebraic
+ * Poincaré conjecture", in Modern Mathematics II, ed. Saaty, 1964; pictured in Hatcher, Algebraic
  * Topology, 2002, Chapter 0; both citations from memory) as a 2-dimensional cubical complex: the face poset of unit squares of
  * the integer grid, with their edges and vertices.
  *

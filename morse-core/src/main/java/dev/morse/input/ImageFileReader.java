@@ -28,8 +28,4 @@ final class ImageFileReader implements InputReader {
         return new VoxelInput(source.toString(), image, InputReaders.millisSince(start));
     }
 
-    @Override
-    public Input parse(String source, String text) {
-        throw new UnsupportedOperationException("images are not text");
-    }
 }

@@ -21,11 +21,4 @@ public interface InputReader {
      * @throws IOException when reading fails for a reason that is not the file's content
      */
     Input read(List<Path> files, ImageOptions options) throws IOException;
-
-    /**
-     * Reads text held in memory, for text formats; {@code source} names it in error messages.
-     *
-     * @throws UnsupportedOperationException for formats that are not text
-     */
-    Input parse(String source, String text);
 }

@@ -19,6 +19,7 @@ import java.util.Optional;
  * Stateless.
  */
 public final class InputReaders {
+    private static final List<TextFileReader<?>> TEXT_READERS = List.of(TextFileReader.POSETS, TextFileReader.FACES);
     private static final List<InputReader> READERS = List.of(new ImageFileReader(), TextFileReader.POSETS,
             TextFileReader.FACES);
 
@@ -65,7 +66,7 @@ public final class InputReaders {
     public static Input parse(String source, String text) {
         InputFormat format = InputFormat.detect(text, source);
         InputProbe probe = new InputProbe(List.of(), false, false, Optional.of(format), ImageOptions.defaults());
-        for (InputReader reader : READERS) {
+        for (TextFileReader<?> reader : TEXT_READERS) {
             if (reader.recognises(probe)) {
                 return reader.parse(source, text);
             }

@@ -65,8 +65,8 @@ final class TextFileReader<T> implements InputReader {
         return wrap.wrap(file.toString(), value, InputReaders.millisSince(start));
     }
 
-    @Override
-    public Input parse(String source, String text) {
+    /** Reads text held in memory; {@code source} names it in error messages. */
+    Input parse(String source, String text) {
         long start = System.nanoTime();
         T value = textParse.parse(text, source);
         return wrap.wrap(source, value, InputReaders.millisSince(start));

@@ -2,8 +2,6 @@ package dev.morse.matching;
 
 import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
-import dev.morse.progress.Progress;
-import it.unimi.dsi.fastutil.ints.IntHeapPriorityQueue;
 
 /**
  * Collapses with a greedy choice of critical cells. Free faces are collapsed in reverse lexicographic
@@ -26,26 +24,12 @@ public final class FreeingCollapseHeuristic implements MatchingHeuristic {
 
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
-        int n = complex.cellCount();
-        int[] rank = LastFreeFaceHeuristic.lexicographicRanks(complex);
+        RevLexCollapse collapse = new RevLexCollapse(complex);
+        FreeFaceState state = collapse.state();
         Boundary boundary = complex.boundary();
-        FreeFaceState state = new FreeFaceState(complex);
-        IntHeapPriorityQueue freeFaces = new IntHeapPriorityQueue((a, b) -> Integer.compare(rank[b], rank[a]));
-        for (int c = 0; c < n; c++) {
-            if (state.isFree(c)) {
-                freeFaces.enqueue(c);
-            }
-        }
         int top = complex.dimension();
-        Progress progress = Progress.current();
-        int pairs = 0;
         while (true) {
-            while (!freeFaces.isEmpty()) {
-                int t = freeFaces.dequeueInt();
-                if (state.isFree(t) && state.collapse(t, freeFaces::enqueue) && (++pairs & 0x7FF) == 0) {
-                    progress.reached(2L * pairs);
-                }
-            }
+            collapse.collapseAll();
             int chosen = -1;
             int chosenScore = -1;
             while (top >= 0 && chosen < 0) {
@@ -61,7 +45,7 @@ public final class FreeingCollapseHeuristic implements MatchingHeuristic {
                             score++;
                         }
                     }
-                    if (score > chosenScore || (score == chosenScore && rank[c] > rank[chosen])) {
+                    if (score > chosenScore || (score == chosenScore && collapse.rank(c) > collapse.rank(chosen))) {
                         chosen = c;
                         chosenScore = score;
                     }
@@ -74,7 +58,7 @@ public final class FreeingCollapseHeuristic implements MatchingHeuristic {
                 return state.matching();
             }
             // every cell of the highest dimension left has no coface left, so it may be removed
-            state.remove(chosen, freeFaces::enqueue);
+            collapse.makeCritical(chosen);
         }
     }
 }

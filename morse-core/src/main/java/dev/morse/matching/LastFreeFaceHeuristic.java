@@ -1,9 +1,7 @@
 package dev.morse.matching;
 
 import dev.morse.complex.ChainComplex;
-import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrays;
-import it.unimi.dsi.fastutil.ints.IntHeapPriorityQueue;
 
 /**
  * Collapses in reverse lexicographic order, the deterministic "rev-lex" strategy that Benedetti and
@@ -26,14 +24,7 @@ public final class LastFreeFaceHeuristic implements MatchingHeuristic {
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
         int n = complex.cellCount();
-        int[] rank = lexicographicRanks(complex);
-        FreeFaceState state = new FreeFaceState(complex);
-        IntHeapPriorityQueue freeFaces = new IntHeapPriorityQueue((a, b) -> Integer.compare(rank[b], rank[a]));
-        for (int c = 0; c < n; c++) {
-            if (state.isFree(c)) {
-                freeFaces.enqueue(c);
-            }
-        }
+        RevLexCollapse collapse = new RevLexCollapse(complex);
         // the highest dimension left is scanned from the top; within it, cells in descending rank
         int[] byDimensionThenRank = new int[n];
         for (int c = 0; c < n; c++) {
@@ -42,25 +33,18 @@ public final class LastFreeFaceHeuristic implements MatchingHeuristic {
         for (int d = 0; d <= complex.dimension(); d++) {
             int first = complex.firstCell(d);
             IntArrays.mergeSort(byDimensionThenRank, first, first + complex.cellCount(d),
-                    (a, b) -> Integer.compare(rank[a], rank[b]));
+                    (a, b) -> Integer.compare(collapse.rank(a), collapse.rank(b)));
         }
         int next = n - 1;
-        Progress progress = Progress.current();
-        int pairs = 0;
         while (true) {
-            while (!freeFaces.isEmpty()) {
-                int t = freeFaces.dequeueInt();
-                if (state.isFree(t) && state.collapse(t, freeFaces::enqueue) && (++pairs & 0x7FF) == 0) {
-                    progress.reached(2L * pairs);
-                }
-            }
-            while (next >= 0 && state.isRemoved(byDimensionThenRank[next])) {
+            collapse.collapseAll();
+            while (next >= 0 && collapse.state().isRemoved(byDimensionThenRank[next])) {
                 next--;
             }
             if (next < 0) {
-                return state.matching();
+                return collapse.state().matching();
             }
-            state.remove(byDimensionThenRank[next], freeFaces::enqueue);
+            collapse.makeCritical(byDimensionThenRank[next]);
         }
     }
 

@@ -62,8 +62,9 @@ public final class RepresentativeCycles {
         Coefficients ring = run.coefficients();
         FlowLift flow = new FlowLift(complex, matching);
         List<Cycle> cycles = new ArrayList<>();
+        java.util.Map<Integer, int[]> criticalByDimension = new java.util.HashMap<>();
         for (MorseGenerators.Generator g : MorseGenerators.of(morse, ring)) {
-            int[] critical = matching.criticalCells(complex, g.dimension());
+            int[] critical = criticalByDimension.computeIfAbsent(g.dimension(), d -> matching.criticalCells(complex, d));
             Int2ObjectOpenHashMap<BigInteger> chain = new Int2ObjectOpenHashMap<>();
             for (int i = 0; i < critical.length; i++) {
                 if (g.coefficients()[i].signum() != 0) {

@@ -1,5 +1,6 @@
 package dev.morse.batch;
 
+import dev.morse.parallel.Workers;
 import dev.morse.engine.Computation;
 import dev.morse.engine.Engines;
 import dev.morse.input.Input;
@@ -19,12 +20,9 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
-import java.util.concurrent.TimeUnit;
-import java.util.concurrent.TimeoutException;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.Consumer;
 import java.util.function.Function;
@@ -38,7 +36,6 @@ import java.util.function.Function;
  * are done.
  */
 public final class BatchRun {
-    private static final long POLL_MILLIS = 200;
 
     private BatchRun() {
     }
@@ -122,7 +119,7 @@ public final class BatchRun {
                 }));
             }
             for (Future<Rendered> future : futures) {
-                Rendered r = await(future, done, progress);
+                Rendered r = Workers.await(future, done::get, progress, () -> { }, "running a batch");
                 emit.accept(r.text());
                 if (r.failed()) {
                     failed++;
@@ -135,27 +132,5 @@ public final class BatchRun {
     }
 
     private record Rendered(String text, boolean failed) {
-    }
-
-    private static Rendered await(Future<Rendered> future, AtomicLong done, Progress progress) {
-        while (true) {
-            try {
-                return future.get(POLL_MILLIS, TimeUnit.MILLISECONDS);
-            } catch (TimeoutException e) {
-                progress.reached(done.get());
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted while running a batch", e);
-            } catch (ExecutionException e) {
-                Throwable cause = e.getCause();
-                if (cause instanceof RuntimeException runtime) {
-                    throw runtime;
-                }
-                if (cause instanceof Error error) {
-                    throw error;
-                }
-                throw new IllegalStateException(cause);
-            }
-        }
     }
 }

@@ -1,5 +1,6 @@
 package dev.morse.interval;
 
+import dev.morse.parallel.Workers;
 import dev.morse.progress.Progress;
 import java.math.BigInteger;
 import java.util.ArrayList;
@@ -7,12 +8,9 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
-import java.util.concurrent.TimeUnit;
-import java.util.concurrent.TimeoutException;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicLong;
 
@@ -31,7 +29,6 @@ import java.util.concurrent.atomic.AtomicLong;
  */
 public final class IntervalSweep {
     private static final int CHUNK = 8;
-    private static final long POLL_MILLIS = 200;
 
     private IntervalSweep() {
     }
@@ -145,38 +142,12 @@ public final class IntervalSweep {
                 }));
             }
             for (Future<?> worker : workers) {
-                awaitReporting(worker, cutoff, done, progress);
+                Workers.await(worker, done::get, progress, () -> cutoff.set(-1), "sweeping intervals");
             }
         } finally {
             pool.shutdownNow();
         }
         progress.reached(done.get());
         return cutoff.get();
-    }
-
-    private static void awaitReporting(Future<?> worker, AtomicInteger cutoff, AtomicLong done,
-            Progress progress) {
-        while (true) {
-            try {
-                worker.get(POLL_MILLIS, TimeUnit.MILLISECONDS);
-                return;
-            } catch (TimeoutException e) {
-                progress.reached(done.get());
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted while sweeping intervals", e);
-            } catch (ExecutionException e) {
-                // stop the others, then hand the failure on as it was thrown
-                cutoff.set(-1);
-                Throwable cause = e.getCause();
-                if (cause instanceof RuntimeException runtime) {
-                    throw runtime;
-                }
-                if (cause instanceof Error error) {
-                    throw error;
-                }
-                throw new IllegalStateException(cause);
-            }
-        }
     }
 }

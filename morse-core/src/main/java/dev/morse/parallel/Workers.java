@@ -4,6 +4,10 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
+import java.util.function.LongSupplier;
+import dev.morse.progress.Progress;
 import java.util.concurrent.atomic.AtomicIntegerArray;
 import java.util.function.IntConsumer;
 
@@ -17,6 +21,8 @@ import java.util.function.IntConsumer;
 public final class Workers {
     /** The system property that fixes the number of threads. */
     public static final String THREADS_PROPERTY = "morse.threads";
+    /** How often a waiting caller shows progress. */
+    private static final long POLL_MILLIS = 200;
 
     private static final ExecutorService POOL = Executors.newCachedThreadPool(task -> {
         Thread t = new Thread(task, "morse-worker");
@@ -92,6 +98,37 @@ public final class Workers {
         }
         if (failure != null) {
             throw new IllegalStateException("a worker failed", failure);
+        }
+    }
+
+    /**
+     * Waits for {@code future}, showing the count {@code done} on {@code progress} while it runs. When
+     * the task failed, {@code onFailure} runs first (to stop its fellow tasks) and the failure is
+     * thrown on as it was: a RuntimeException or Error unchanged, anything else wrapped.
+     *
+     * @param what what is waited for, named when the wait is interrupted
+     */
+    public static <T> T await(Future<T> future, LongSupplier done, Progress progress, Runnable onFailure,
+            String what) {
+        while (true) {
+            try {
+                return future.get(POLL_MILLIS, TimeUnit.MILLISECONDS);
+            } catch (TimeoutException e) {
+                progress.reached(done.getAsLong());
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("interrupted while " + what, e);
+            } catch (ExecutionException e) {
+                onFailure.run();
+                Throwable cause = e.getCause();
+                if (cause instanceof RuntimeException runtime) {
+                    throw runtime;
+                }
+                if (cause instanceof Error error) {
+                    throw error;
+                }
+                throw new IllegalStateException(cause);
+            }
         }
     }
 }

@@ -5,7 +5,6 @@ import dev.morse.engine.MatchingRun;
 import dev.morse.matching.OptimalMatching;
 
 import dev.morse.homology.HomologyGroup;
-import dev.morse.matching.TrialCount;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;

@@ -13,7 +13,6 @@ import dev.morse.input.VoxelInput;
 import java.math.BigInteger;
 import java.util.List;
 import java.util.Locale;
-import java.util.StringJoiner;
 
 /**
  * Writes an inspection for people: a two-column table of what a poset or a simplicial complex is,

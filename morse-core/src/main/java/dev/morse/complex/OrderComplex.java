@@ -13,17 +13,12 @@ import dev.morse.poset.Poset;
  * again for the coboundary once it is requested. Building needs, for a while, 4 bytes per
  * comparable pair (the up-sets) and 4 bytes per cell (the prefix tree of chains).
  */
-public final class OrderComplex extends StoredComplex {
-    /** The default bound on the number of cells: every cell id must be an int. */
-    public static final long DEFAULT_CELL_LIMIT = CellLimits.MAX_ARRAY;
-
+public final class OrderComplex extends TupleComplex {
     private final Poset poset;
-    private final int[][] chains;
 
     private OrderComplex(Poset poset, GradedCells cells, int[][] chains, Boundary boundary) {
-        super(ComplexKind.ORDER, cells, boundary);
+        super(ComplexKind.ORDER, cells, chains, boundary);
         this.poset = poset;
-        this.chains = chains;
     }
 
     /**
@@ -55,18 +50,12 @@ public final class OrderComplex extends StoredComplex {
 
     /** The chain's elements, ascending in the order (bottom first). A copy. */
     public int[] chain(int cell) {
-        return tupleIn(chains, cell);
+        return vertexTuple(cell);
     }
 
     /** The chain's labels joined bottom first, like {@code a<b<c}. */
     @Override
     public String cellName(int cell) {
-        return tupleName(chains, cell, poset::label, "", '<', "");
-    }
-
-    /** The chain itself, so lexicographic matchings follow chains. */
-    @Override
-    public int[] vertexTuple(int cell) {
-        return chain(cell);
+        return tupleName(cell, poset::label, "", '<', "");
     }
 }

@@ -16,17 +16,12 @@ import java.util.Arrays;
  * {@code 4 + 8(d+1)} for its boundary row, {@code 12(d+1) + 4} bytes in all, and about as much
  * again for the coboundary once it is requested.
  */
-public final class SimplicialComplex extends StoredComplex {
-    /** The default bound on the number of cells: every cell id must be an int. */
-    public static final long DEFAULT_CELL_LIMIT = CellLimits.MAX_ARRAY;
-
+public final class SimplicialComplex extends TupleComplex {
     private final Facets facets;
-    private final int[][] simplices;
 
     private SimplicialComplex(Facets facets, GradedCells cells, int[][] simplices, Boundary boundary) {
-        super(ComplexKind.SIMPLICIAL, cells, boundary);
+        super(ComplexKind.SIMPLICIAL, cells, simplices, boundary);
         this.facets = facets;
-        this.simplices = simplices;
     }
 
     /**
@@ -160,18 +155,12 @@ public final class SimplicialComplex extends StoredComplex {
 
     /** The simplex's vertex ids, ascending. A copy. */
     public int[] simplex(int cell) {
-        return tupleIn(simplices, cell);
+        return vertexTuple(cell);
     }
 
     /** The vertex labels in braces, ascending by vertex id, like <code>{a b c}</code>. */
     @Override
     public String cellName(int cell) {
-        return tupleName(simplices, cell, facets::vertexLabel, "{", ' ', "}");
-    }
-
-    /** The vertex ids, so lexicographic matchings follow simplices. */
-    @Override
-    public int[] vertexTuple(int cell) {
-        return simplex(cell);
+        return tupleName(cell, facets::vertexLabel, "{", ' ', "}");
     }
 }

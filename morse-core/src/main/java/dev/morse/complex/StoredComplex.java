@@ -1,8 +1,5 @@
 package dev.morse.complex;
 
-import java.util.Arrays;
-import java.util.function.IntFunction;
-
 /**
  * What every stored complex holds alike: its kind, its graded cells, its boundary and, computed on
  * first request, its coboundary (the transpose). Subclasses add only what makes them differ: how
@@ -51,30 +48,5 @@ public abstract class StoredComplex implements ChainComplex {
     @Override
     public final Boundary coboundary() {
         return coboundary.get();
-    }
-
-    /**
-     * The {@code d + 1} entries of a cell of dimension d in a table holding, per dimension, the
-     * tuples of its cells one after another. A copy.
-     */
-    protected final int[] tupleIn(int[][] table, int cell) {
-        int d = cells.dimensionOf(cell);
-        int local = cell - cells.firstCell(d);
-        return Arrays.copyOfRange(table[d], local * (d + 1), (local + 1) * (d + 1));
-    }
-
-    /** The labels of a cell's tuple joined by {@code separator}, between {@code open} and {@code close}. */
-    protected final String tupleName(int[][] table, int cell, IntFunction<String> label, String open, char separator,
-            String close) {
-        int d = cells.dimensionOf(cell);
-        int at = (cell - cells.firstCell(d)) * (d + 1);
-        StringBuilder name = new StringBuilder(open);
-        for (int i = 0; i <= d; i++) {
-            if (i > 0) {
-                name.append(separator);
-            }
-            name.append(label.apply(table[d][at + i]));
-        }
-        return name.append(close).toString();
     }
 }

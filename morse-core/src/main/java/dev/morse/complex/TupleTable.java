@@ -44,13 +44,9 @@ final class TupleTable {
 
     /** Adds {@code source[from .. from+width)} unless present; returns its number. */
     int add(int[] source, int from) {
-        int mask = slots.length - 1;
-        int slot = hash(source, from) & mask;
-        while (slots[slot] >= 0) {
-            if (equalsAt(slots[slot], source, from)) {
-                return slots[slot];
-            }
-            slot = (slot + 1) & mask;
+        int slot = slotOf(source, from);
+        if (slots[slot] >= 0) {
+            return slots[slot];
         }
         if (count >= MAX_TUPLES || (long) (count + 1) * width > CellLimits.MAX_ARRAY) {
             throw new IllegalStateException("more than " + Math.min(MAX_TUPLES, CellLimits.MAX_ARRAY / width)
@@ -70,15 +66,17 @@ final class TupleTable {
 
     /** The number of {@code source[from .. from+width)}, or -1. */
     int find(int[] source, int from) {
+        return slots[slotOf(source, from)];
+    }
+
+    /** The slot holding {@code source[from .. from+width)}, or the empty slot (-1) where it belongs. */
+    private int slotOf(int[] source, int from) {
         int mask = slots.length - 1;
         int slot = hash(source, from) & mask;
-        while (slots[slot] >= 0) {
-            if (equalsAt(slots[slot], source, from)) {
-                return slots[slot];
-            }
+        while (slots[slot] >= 0 && !equalsAt(slots[slot], source, from)) {
             slot = (slot + 1) & mask;
         }
-        return -1;
+        return slot;
     }
 
     /** Renumbers the tuples in lexicographic order. */

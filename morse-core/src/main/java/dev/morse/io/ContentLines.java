@@ -2,6 +2,8 @@ package dev.morse.io;
 
 import java.io.BufferedReader;
 import java.io.IOException;
+import java.io.Reader;
+import java.io.StringReader;
 import java.io.UncheckedIOException;
 
 /**
@@ -19,6 +21,29 @@ final class ContentLines {
     ContentLines(BufferedReader reader, String source) {
         this.reader = reader;
         this.source = source;
+    }
+
+    /** The lines of {@code reader} after its header line, checked to be {@code kind version}. */
+    static ContentLines afterHeader(Reader reader, String source, String kind, String version) {
+        ContentLines lines = new ContentLines(reader instanceof BufferedReader b ? b : new BufferedReader(reader), source);
+        lines.expectHeader(kind, version);
+        return lines;
+    }
+
+    /** Reads text held in a string, where reading cannot fail. */
+    static <T> T fromString(String text, String source, TextRead<T> read) {
+        try {
+            return read.read(new StringReader(text), source);
+        } catch (IOException e) {
+            throw new AssertionError("a string reader does not fail", e);
+        }
+    }
+
+    /** A reader of one text format. */
+    @FunctionalInterface
+    interface TextRead<T> {
+        /** Reads all of {@code reader}; {@code source} names it in error messages. */
+        T read(Reader reader, String source) throws IOException;
     }
 
     /** The next meaningful line, or {@code null} at the end. */

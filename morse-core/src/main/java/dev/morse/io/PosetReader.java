@@ -7,7 +7,6 @@ import dev.morse.progress.Progress;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.io.StringReader;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -45,18 +44,12 @@ public final class PosetReader {
 
     /** Reads poset text from a string; {@code source} names it in error messages. */
     public static Poset parse(String text, String source) {
-        try {
-            return read(new BufferedReader(new StringReader(text)), source);
-        } catch (IOException e) {
-            throw new AssertionError("a string reader does not fail", e);
-        }
+        return ContentLines.fromString(text, source, PosetReader::read);
     }
 
     /** Reads poset text from {@code reader}; {@code source} names it in error messages. */
     public static Poset read(Reader reader, String source) throws IOException {
-        BufferedReader buffered = reader instanceof BufferedReader b ? b : new BufferedReader(reader);
-        ContentLines lines = new ContentLines(buffered, source);
-        lines.expectHeader(KIND, VERSION);
+        ContentLines lines = ContentLines.afterHeader(reader, source, KIND, VERSION);
         PosetBuilder builder = new PosetBuilder();
         Progress progress = Progress.current();
         progress.begin("read", "lines", 0);

@@ -8,7 +8,6 @@ import it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.io.StringReader;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -35,18 +34,12 @@ public final class SimplicialReader {
 
     /** Reads simplicial text from a string; {@code source} names it in error messages. */
     public static Facets parse(String text, String source) {
-        try {
-            return read(new BufferedReader(new StringReader(text)), source);
-        } catch (IOException e) {
-            throw new AssertionError("a string reader does not fail", e);
-        }
+        return ContentLines.fromString(text, source, SimplicialReader::read);
     }
 
     /** Reads simplicial text; {@code source} names it in error messages. */
     public static Facets read(Reader reader, String source) throws IOException {
-        BufferedReader buffered = reader instanceof BufferedReader b ? b : new BufferedReader(reader);
-        ContentLines lines = new ContentLines(buffered, source);
-        lines.expectHeader(KIND, VERSION);
+        ContentLines lines = ContentLines.afterHeader(reader, source, KIND, VERSION);
         Object2IntOpenHashMap<String> ids = new Object2IntOpenHashMap<>();
         ids.defaultReturnValue(-1);
         List<String> labels = new ArrayList<>();

@@ -14,6 +14,7 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import java.util.function.Supplier;
+import java.util.function.UnaryOperator;
 import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
@@ -62,17 +63,13 @@ final class OperationCommand implements Callable<Integer> {
 
     @Command(name = "dual", mixinStandardHelpOptions = true, description = "The dual poset: the order reversed; the order complex is the same.")
     int dual(@Parameters(paramLabel = "P", description = POSET) Path p, @Mixin OutputFile output) throws IOException {
-        Poset poset = InputFiles.readPoset(p);
-        Poset made = checked(p, () -> PosetOperations.dual(poset));
-        return output.write(() -> new Generated.OfPoset(made, "the dual of " + p));
+        return applied(p, output, "the dual of " + p, PosetOperations::dual);
     }
 
     @Command(name = "proper-part", mixinStandardHelpOptions = true, description = "The poset without its least and greatest elements.")
     int properPart(@Parameters(paramLabel = "P", description = POSET) Path p, @Mixin OutputFile output)
             throws IOException {
-        Poset poset = InputFiles.readPoset(p);
-        Poset made = checked(p, () -> PosetOperations.properPart(poset));
-        return output.write(() -> new Generated.OfPoset(made, "the proper part of " + p));
+        return applied(p, output, "the proper part of " + p, PosetOperations::properPart);
     }
 
     @Command(name = "closed-interval", mixinStandardHelpOptions = true, description = "The closed interval [X, Y] = {z : X <= z <= Y}.")
@@ -80,10 +77,8 @@ final class OperationCommand implements Callable<Integer> {
             @Parameters(index = "1", paramLabel = "X", description = "The label of the bottom.") String x,
             @Parameters(index = "2", paramLabel = "Y", description = "The label of the top.") String y,
             @Mixin OutputFile output) throws IOException {
-        Poset poset = InputFiles.readPoset(p);
-        Poset made = checked(p, () -> PosetOperations.closedInterval(poset, PosetOperations.element(poset, x),
-                PosetOperations.element(poset, y)));
-        return output.write(() -> new Generated.OfPoset(made, "the closed interval [" + x + ", " + y + "] of " + p));
+        return applied(p, output, "the closed interval [" + x + ", " + y + "] of " + p, poset -> PosetOperations
+                .closedInterval(poset, PosetOperations.element(poset, x), PosetOperations.element(poset, y)));
     }
 
     @Command(name = "open-interval", mixinStandardHelpOptions = true, description = "The open interval (X, Y) = {z : X < z < Y}.")
@@ -91,10 +86,8 @@ final class OperationCommand implements Callable<Integer> {
             @Parameters(index = "1", paramLabel = "X", description = "The label of the element below.") String x,
             @Parameters(index = "2", paramLabel = "Y", description = "The label of the element above.") String y,
             @Mixin OutputFile output) throws IOException {
-        Poset poset = InputFiles.readPoset(p);
-        Poset made = checked(p, () -> PosetOperations.openInterval(poset, PosetOperations.element(poset, x),
-                PosetOperations.element(poset, y)));
-        return output.write(() -> new Generated.OfPoset(made, "the open interval (" + x + ", " + y + ") of " + p));
+        return applied(p, output, "the open interval (" + x + ", " + y + ") of " + p, poset -> PosetOperations
+                .openInterval(poset, PosetOperations.element(poset, x), PosetOperations.element(poset, y)));
     }
 
     @Command(name = "rank-select", mixinStandardHelpOptions = true, description = "The elements whose rank lies in RANKS (minimal elements have"
@@ -103,18 +96,23 @@ final class OperationCommand implements Callable<Integer> {
             @Parameters(index = "1", paramLabel = "RANKS", description = "Ranks like 1,3 or 1-3 or 0,2-4.",
                     converter = OptionConverters.RanksConverter.class) OptionConverters.Ranks ranks,
             @Mixin OutputFile output) throws IOException {
-        Poset poset = InputFiles.readPoset(p);
-        Poset made = checked(p, () -> PosetOperations.rankSelection(poset, ranks.values()));
-        return output.write(() -> new Generated.OfPoset(made, "the elements of ranks " + ranks + " of " + p));
+        return applied(p, output, "the elements of ranks " + ranks + " of " + p,
+                poset -> PosetOperations.rankSelection(poset, ranks.values()));
     }
 
     @Command(name = "subdivide", mixinStandardHelpOptions = true, description = "The face poset of the order complex: the chains of P ordered by"
             + " inclusion; its order complex is the barycentric subdivision of that of P.")
     int subdivide(@Parameters(paramLabel = "P", description = POSET) Path p, @Mixin OutputFile output)
             throws IOException {
+        return applied(p, output, "the chains of " + p + " ordered by inclusion", Subdivision::of);
+    }
+
+    /** Reads the poset file {@code p}, applies {@code operation} and writes the result with its description. */
+    private static int applied(Path p, OutputFile output, String description, UnaryOperator<Poset> operation)
+            throws IOException {
         Poset poset = InputFiles.readPoset(p);
-        Poset made = checked(p, () -> Subdivision.of(poset));
-        return output.write(() -> new Generated.OfPoset(made, "the chains of " + p + " ordered by inclusion"));
+        Poset made = checked(p, () -> operation.apply(poset));
+        return output.write(() -> new Generated.OfPoset(made, description));
     }
 
     /** Runs an operation, turning its refusal of the inputs into an input error on {@code source}, the first input. */

@@ -35,13 +35,7 @@ final class BatchCommand implements Callable<Integer> {
     private List<Path> files;
 
     @Mixin
-    private EngineOptions engine;
-
-    @Mixin
-    private MatchingChoice matching;
-
-    @Mixin
-    private MatchingRuns runs;
+    private RequestOptions request;
 
     @Mixin
     private ThreadsOption threads;
@@ -55,7 +49,7 @@ final class BatchCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        BatchOptions options = new BatchOptions(engine.request(spec, runs, matching.name()),
+        BatchOptions options = new BatchOptions(request.request(spec),
                 new ImageOptions(OptionalInt.empty(), false, Optional.empty()), threads.threads(spec), cohenMacaulay);
         List<BatchItem> items = BatchRun.items(files);
         PrintWriter out = spec.commandLine().getOut();

@@ -20,13 +20,7 @@ final class ComputationOptions {
     private InputOptions input;
 
     @Mixin
-    private EngineOptions engine;
-
-    @Mixin
-    private MatchingChoice matching;
-
-    @Mixin
-    private MatchingRuns runs;
+    private RequestOptions request;
 
     @Mixin
     private RunOptions run;
@@ -36,9 +30,9 @@ final class ComputationOptions {
         return input.read(spec);
     }
 
-    /** The request the options make; see {@link EngineOptions#request}. */
+    /** The request the options make; see {@link RequestOptions#request}. */
     Request request(CommandSpec spec) {
-        return engine.request(spec, runs, matching.name());
+        return request.request(spec);
     }
 
     /** Runs {@code work} with the progress line, unless {@code --quiet}. */
@@ -48,10 +42,10 @@ final class ComputationOptions {
 
     /** Reads the input and computes, with the progress line; warns of options that did not apply. */
     Computation compute(CommandSpec spec) throws Exception {
-        Request request = request(spec);
-        Computation result = run.around(spec, () -> Engines.compute(read(spec), request));
+        Request asked = request(spec);
+        Computation result = run.around(spec, () -> Engines.compute(read(spec), asked));
         List<String> warnings = new ArrayList<>(input.warnings(result.input()));
-        warnings.addAll(Warnings.matchingOptions(result, matching.name(), runs.trials()));
+        warnings.addAll(Warnings.matchingOptions(result, request.matchingName(), request.trials()));
         Warnings.print(spec, warnings);
         return result;
     }

@@ -14,17 +14,40 @@ import java.util.Objects;
  * One generated input, ready to be written in its format with a comment line saying what it is.
  */
 public sealed interface Generated permits Generated.OfPoset, Generated.OfFacets, Generated.OfVoxels {
-    /** The format it is written in. */
-    InputFormat format();
-
     /** What it is, for the comment line and for people. */
     String description();
 
-    /** Its size in a few words, like {@code 52 elements, 171 covers}. */
-    String size();
+    /** The format it is written in: simplicial for facets, the poset format otherwise. */
+    default InputFormat format() {
+        return this instanceof OfFacets ? InputFormat.SIMPLICIAL : InputFormat.POSET;
+    }
 
-    /** Writes it, header first, then the comment line; does not close {@code out}. */
-    void write(Writer out) throws IOException;
+    /** Its size in a few words, like {@code 52 elements, 171 covers}. */
+    default String size() {
+        if (this instanceof OfPoset p) {
+            return p.poset().size() + " elements, " + p.poset().coverCount() + " covers";
+        }
+        if (this instanceof OfFacets f) {
+            return f.facets().vertexCount() + " vertices, " + f.facets().faceCount() + " facets";
+        }
+        VoxelSet voxels = ((OfVoxels) this).voxels();
+        return voxels.count() + " of " + voxels.positions() + " voxels";
+    }
+
+    /**
+     * Writes it, header first, then the comment line; does not close {@code out}. Voxels are
+     * written as the face poset of their cubical complex, streaming.
+     */
+    default void write(Writer out) throws IOException {
+        if (this instanceof OfVoxels v) {
+            CubicalFacePoset.write(v.voxels(), out, description());
+            return;
+        }
+        String text = this instanceof OfPoset p ? PosetWriter.toText(p.poset())
+                : SimplicialWriter.toText(((OfFacets) this).facets());
+        int headerEnd = text.indexOf('\n') + 1;
+        out.write(text.substring(0, headerEnd) + "# " + description() + "\n" + text.substring(headerEnd));
+    }
 
     /**
      * A poset.
@@ -37,21 +60,6 @@ public sealed interface Generated permits Generated.OfPoset, Generated.OfFacets,
         public OfPoset {
             Objects.requireNonNull(poset, "poset");
             Objects.requireNonNull(description, "description");
-        }
-
-        @Override
-        public InputFormat format() {
-            return InputFormat.POSET;
-        }
-
-        @Override
-        public String size() {
-            return poset.size() + " elements, " + poset.coverCount() + " covers";
-        }
-
-        @Override
-        public void write(Writer out) throws IOException {
-            out.write(withComment(PosetWriter.toText(poset), description));
         }
     }
 
@@ -67,25 +75,10 @@ public sealed interface Generated permits Generated.OfPoset, Generated.OfFacets,
             Objects.requireNonNull(facets, "facets");
             Objects.requireNonNull(description, "description");
         }
-
-        @Override
-        public InputFormat format() {
-            return InputFormat.SIMPLICIAL;
-        }
-
-        @Override
-        public String size() {
-            return facets.vertexCount() + " vertices, " + facets.faceCount() + " facets";
-        }
-
-        @Override
-        public void write(Writer out) throws IOException {
-            out.write(withComment(SimplicialWriter.toText(facets), description));
-        }
     }
 
     /**
-     * A set of voxels, written as the face poset of its cubical complex, streaming.
+     * A set of voxels.
      *
      * @param voxels the voxels
      * @param description what it is
@@ -96,26 +89,5 @@ public sealed interface Generated permits Generated.OfPoset, Generated.OfFacets,
             Objects.requireNonNull(voxels, "voxels");
             Objects.requireNonNull(description, "description");
         }
-
-        @Override
-        public InputFormat format() {
-            return InputFormat.POSET;
-        }
-
-        @Override
-        public String size() {
-            return voxels.count() + " of " + voxels.positions() + " voxels";
-        }
-
-        @Override
-        public void write(Writer out) throws IOException {
-            CubicalFacePoset.write(voxels, out, description);
-        }
-    }
-
-    /** Puts a comment line right after the header line of {@code text}. */
-    private static String withComment(String text, String comment) {
-        int headerEnd = text.indexOf('\n') + 1;
-        return text.substring(0, headerEnd) + "# " + comment + "\n" + text.substring(headerEnd);
     }
 }

@@ -33,6 +33,24 @@ final class GenerateCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
+    /** The size of the ground set of a lattice, and whether to keep only its proper part. */
+    static final class LatticeOnSet {
+        @Parameters(paramLabel = "N", description = "The size of the ground set.")
+        int size;
+
+        @Option(names = "--proper", description = PROPER)
+        boolean proper;
+    }
+
+    /** The dimension of a polytope, and which of its faces to write. */
+    static final class PolytopeFaces {
+        @Parameters(paramLabel = "D", description = "The dimension.")
+        int dimension;
+
+        @Option(names = "--part", paramLabel = "PART", defaultValue = "boundary", description = PART,
+                converter = OptionConverters.FacePartConverter.class)
+        FacePart part;
+    }
 
     @Override
     public Integer call() {
@@ -42,50 +60,35 @@ final class GenerateCommand implements Callable<Integer> {
 
     @Command(name = "boolean", mixinStandardHelpOptions = true, description = "The Boolean lattice B_n of subsets of {1..n}; proper part: the"
             + " boundary of the (n-1)-simplex, a sphere S^(n-2).")
-    int booleanLattice(@Parameters(paramLabel = "N", description = "The size of the ground set.") int n,
-            @Option(names = "--proper", description = PROPER) boolean proper,
-            @Mixin OutputFile output) throws IOException {
-        return output.write(() -> Families.booleanLattice(n, proper));
+    int booleanLattice(@Mixin LatticeOnSet lattice, @Mixin OutputFile output) throws IOException {
+        return output.write(() -> Families.booleanLattice(lattice.size, lattice.proper));
     }
 
     @Command(name = "simplex", mixinStandardHelpOptions = true, description = "Face poset of the d-simplex.")
-    int simplex(@Parameters(paramLabel = "D", description = "The dimension.") int d,
-            @Option(names = "--part", paramLabel = "PART", defaultValue = "boundary", description = PART,
-                    converter = OptionConverters.FacePartConverter.class) FacePart part,
-            @Mixin OutputFile output) throws IOException {
-        return output.write(() -> Families.simplex(d, part));
+    int simplex(@Mixin PolytopeFaces faces, @Mixin OutputFile output) throws IOException {
+        return output.write(() -> Families.simplex(faces.dimension, faces.part));
     }
 
     @Command(name = "cube", mixinStandardHelpOptions = true, description = "Face poset of the d-cube (faces as words over 0, 1, *).")
-    int cube(@Parameters(paramLabel = "D", description = "The dimension.") int d,
-            @Option(names = "--part", paramLabel = "PART", defaultValue = "boundary", description = PART,
-                    converter = OptionConverters.FacePartConverter.class) FacePart part,
-            @Mixin OutputFile output) throws IOException {
-        return output.write(() -> Families.cube(d, part));
+    int cube(@Mixin PolytopeFaces faces, @Mixin OutputFile output) throws IOException {
+        return output.write(() -> Families.cube(faces.dimension, faces.part));
     }
 
     @Command(name = "cross", mixinStandardHelpOptions = true, description = "Face poset of the d-dimensional cross-polytope (faces as sign vectors).")
-    int cross(@Parameters(paramLabel = "D", description = "The dimension.") int d,
-            @Option(names = "--part", paramLabel = "PART", defaultValue = "boundary", description = PART,
-                    converter = OptionConverters.FacePartConverter.class) FacePart part,
-            @Mixin OutputFile output) throws IOException {
-        return output.write(() -> Families.crossPolytope(d, part));
+    int cross(@Mixin PolytopeFaces faces, @Mixin OutputFile output) throws IOException {
+        return output.write(() -> Families.crossPolytope(faces.dimension, faces.part));
     }
 
     @Command(name = "partition", mixinStandardHelpOptions = true, description = "The partition lattice Pi_n; proper part: a wedge of (n-1)! spheres"
             + " S^(n-3) (Bjorner 1980).")
-    int partition(@Parameters(paramLabel = "N", description = "The size of the ground set.") int n,
-            @Option(names = "--proper", description = PROPER) boolean proper,
-            @Mixin OutputFile output) throws IOException {
-        return output.write(() -> Families.partitionLattice(n, proper));
+    int partition(@Mixin LatticeOnSet lattice, @Mixin OutputFile output) throws IOException {
+        return output.write(() -> Families.partitionLattice(lattice.size, lattice.proper));
     }
 
     @Command(name = "noncrossing", mixinStandardHelpOptions = true, description = "The noncrossing partition lattice NC_n; proper part: a wedge of"
             + " Catalan(n-1) spheres S^(n-3) (Kreweras 1972).")
-    int noncrossing(@Parameters(paramLabel = "N", description = "The size of the ground set.") int n,
-            @Option(names = "--proper", description = PROPER) boolean proper,
-            @Mixin OutputFile output) throws IOException {
-        return output.write(() -> Families.noncrossingPartitionLattice(n, proper));
+    int noncrossing(@Mixin LatticeOnSet lattice, @Mixin OutputFile output) throws IOException {
+        return output.write(() -> Families.noncrossingPartitionLattice(lattice.size, lattice.proper));
     }
 
     @Command(name = "subspace", mixinStandardHelpOptions = true, description = "The lattice of subspaces of F_q^n (q a prime power); proper part: a"

@@ -13,6 +13,9 @@ import dev.morse.poset.PosetBuilder;
  * dual to that of the d-cube.
  */
 public final class CrossPolytopeFaces {
+    /** The letters of a face's word, digit 0, 1 and 2 in base 3 (0, +, then -). */
+    private static final String LETTERS = "0+-";
+
     /** Largest dimension accepted: 3^12 = 531441 faces. */
     public static final int MAX_DIMENSION = 12;
     /** Label of the whole cross-polytope in the closed ball and the face lattice. */
@@ -31,27 +34,14 @@ public final class CrossPolytopeFaces {
         return build(d, part != FacePart.BOUNDARY, part == FacePart.LATTICE);
     }
 
-    /** The sign word of face number {@code code}, reading {@code code} in base 3 (0, +, then -). */
-    static String word(int code, int d) {
-        char[] w = new char[d];
-        for (int i = 0; i < d; i++) {
-            w[i] = "0+-".charAt(code % 3);
-            code /= 3;
-        }
-        return new String(w);
-    }
-
     private static Poset build(int d, boolean withWhole, boolean withEmpty) {
         Sizes.inRange("dimension", d, 1, MAX_DIMENSION);
-        int words = 1;
-        for (int i = 0; i < d; i++) {
-            words *= 3;
-        }
+        int words = TernaryWords.count(d);
         PosetBuilder b = new PosetBuilder();
         int first = withEmpty ? 0 : 1; // code 0 is the zero word
         int[] id = new int[words];
         for (int code = first; code < words; code++) {
-            id[code] = b.element(word(code, d));
+            id[code] = b.element(TernaryWords.word(code, d, LETTERS));
         }
         for (int code = first; code < words; code++) {
             int place = 1;
@@ -66,7 +56,7 @@ public final class CrossPolytopeFaces {
         if (withWhole) {
             int whole = b.element(WHOLE);
             for (int code = first; code < words; code++) {
-                if (word(code, d).indexOf('0') < 0) {
+                if (TernaryWords.word(code, d, LETTERS).indexOf('0') < 0) {
                     b.relate(id[code], whole, 0);
                 }
             }

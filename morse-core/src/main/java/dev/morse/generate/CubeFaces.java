@@ -10,6 +10,9 @@ import dev.morse.poset.PosetBuilder;
  * faces, {@code C(d,k) 2^(d-k)} of dimension k (common practice).
  */
 public final class CubeFaces {
+    /** The letters of a face's word, digit 0, 1 and 2 in base 3 (0, 1, then *). */
+    private static final String LETTERS = "01*";
+
     /** Largest dimension accepted: 3^12 = 531441 faces. */
     public static final int MAX_DIMENSION = 12;
     /** Label of the empty face in {@link #faceLattice}. */
@@ -36,28 +39,15 @@ public final class CubeFaces {
         return build(d, true, true);
     }
 
-    /** The word of face number {@code code}, reading {@code code} in base 3 (0, 1, then *). */
-    static String word(int code, int d) {
-        char[] w = new char[d];
-        for (int i = 0; i < d; i++) {
-            w[i] = "01*".charAt(code % 3);
-            code /= 3;
-        }
-        return new String(w);
-    }
-
     private static Poset build(int d, boolean withCube, boolean withEmpty) {
         Sizes.inRange("dimension", d, 1, MAX_DIMENSION);
-        int faces = 1;
-        for (int i = 0; i < d; i++) {
-            faces *= 3;
-        }
+        int faces = TernaryWords.count(d);
         PosetBuilder b = new PosetBuilder();
         int empty = withEmpty ? b.element(EMPTY_FACE) : -1;
         int offset = b.size();
         int count = withCube ? faces : faces - 1; // the last code is the cube *...*
         for (int code = 0; code < count; code++) {
-            b.element(word(code, d));
+            b.element(TernaryWords.word(code, d, LETTERS));
         }
         for (int code = 0; code < count; code++) {
             boolean vertex = true;

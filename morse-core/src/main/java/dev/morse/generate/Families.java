@@ -2,6 +2,7 @@ package dev.morse.generate;
 
 import dev.morse.image.VoxelSet;
 import dev.morse.poset.Poset;
+import java.util.function.IntFunction;
 
 /**
  * The generated families as the command line offers them, each with the variants that make sense
@@ -21,22 +22,26 @@ public final class Families {
 
     /** Faces of the d-simplex. */
     public static Generated simplex(int d, FacePart part) {
-        Poset p = switch (part) {
-            case BOUNDARY -> SimplexFaces.boundaryFacePoset(d);
-            case CLOSED -> SimplexFaces.closedFacePoset(d);
-            case LATTICE -> SimplexFaces.faceLattice(d);
-        };
+        Poset p = facesOf(part, d, SimplexFaces::boundaryFacePoset, SimplexFaces::closedFacePoset,
+                SimplexFaces::faceLattice);
         return new Generated.OfPoset(p, faces(part) + "the " + d + "-simplex");
     }
 
     /** Faces of the d-cube. */
     public static Generated cube(int d, FacePart part) {
-        Poset p = switch (part) {
-            case BOUNDARY -> CubeFaces.boundaryFacePoset(d);
-            case CLOSED -> CubeFaces.closedFacePoset(d);
-            case LATTICE -> CubeFaces.faceLattice(d);
-        };
+        Poset p = facesOf(part, d, CubeFaces::boundaryFacePoset, CubeFaces::closedFacePoset, CubeFaces::faceLattice);
         return new Generated.OfPoset(p, faces(part) + "the " + d + "-cube");
+    }
+
+    /** The one of three face posets of a d-polytope that {@code part} asks for. */
+    private static Poset facesOf(FacePart part, int d, IntFunction<Poset> boundary, IntFunction<Poset> closed,
+            IntFunction<Poset> lattice) {
+        IntFunction<Poset> chosen = switch (part) {
+            case BOUNDARY -> boundary;
+            case CLOSED -> closed;
+            case LATTICE -> lattice;
+        };
+        return chosen.apply(d);
     }
 
     /** Faces of the d-dimensional cross-polytope. */

@@ -1,7 +1,6 @@
 package dev.morse.complex;
 
 import dev.morse.poset.CompressedRows;
-import java.util.Arrays;
 
 /**
  * An immutable sparse integer incidence relation between cells, in CSR form: the entries of cell
@@ -55,23 +54,12 @@ public final class Boundary extends CompressedRows {
 
     /** The transposed relation over {@code targetCount} cells, rows sorted by target. */
     public Boundary transpose(int targetCount) {
-        int[] tOffsets = new int[targetCount + 1];
-        for (int t : targets) {
-            tOffsets[t + 1]++;
-        }
-        for (int v = 0; v < targetCount; v++) {
-            tOffsets[v + 1] += tOffsets[v];
-        }
-        int[] fill = Arrays.copyOf(tOffsets, targetCount);
         int[] tTargets = new int[targets.length];
         int[] tCoefficients = new int[targets.length];
-        for (int c = 0; c < cellCount(); c++) {
-            for (int i = offsets[c]; i < offsets[c + 1]; i++) {
-                int slot = fill[targets[i]]++;
-                tTargets[slot] = c;
-                tCoefficients[slot] = coefficients[i];
-            }
-        }
+        int[] tOffsets = transpose(targetCount, (i, c, slot) -> {
+            tTargets[slot] = c;
+            tCoefficients[slot] = coefficients[i];
+        });
         return new Boundary(tOffsets, tTargets, tCoefficients);
     }
 }

@@ -75,21 +75,8 @@ public final class Adjacency extends CompressedRows {
 
     /** The reversed graph. */
     public Adjacency transpose() {
-        int n = vertexCount();
-        int[] tOffsets = new int[n + 1];
-        for (int t : targets) {
-            tOffsets[t + 1]++;
-        }
-        for (int v = 0; v < n; v++) {
-            tOffsets[v + 1] += tOffsets[v];
-        }
-        int[] fill = Arrays.copyOf(tOffsets, n);
         int[] tTargets = new int[targets.length];
-        for (int x = 0; x < n; x++) {
-            for (int i = offsets[x]; i < offsets[x + 1]; i++) {
-                tTargets[fill[targets[i]]++] = x; // x ascending, so rows come out sorted
-            }
-        }
+        int[] tOffsets = transpose(vertexCount(), (i, x, slot) -> tTargets[slot] = x);
         return new Adjacency(tOffsets, tTargets);
     }
 }

@@ -1,5 +1,7 @@
 package dev.morse.poset;
 
+import java.util.Arrays;
+
 /**
  * Rows of ints stored one after another in one array, compressed sparse row form: the entries of
  * row {@code r} are {@code target(start(r)) .. target(end(r) - 1)}. Hasse diagrams, down-sets,
@@ -56,5 +58,35 @@ public abstract class CompressedRows {
     /** The entry at index {@code i}. */
     public final int target(int i) {
         return targets[i];
+    }
+
+    /**
+     * Lays out the transpose over {@code columns} rows and returns its offsets: row t of the
+     * transpose lists the rows holding entry t. {@code place} is told, for every entry, its index,
+     * its row and its slot in the transpose; rows are visited in ascending order, so every
+     * transposed row comes out sorted.
+     */
+    protected final int[] transpose(int columns, EntryPlacement place) {
+        int[] tOffsets = new int[columns + 1];
+        for (int t : targets) {
+            tOffsets[t + 1]++;
+        }
+        for (int v = 0; v < columns; v++) {
+            tOffsets[v + 1] += tOffsets[v];
+        }
+        int[] fill = Arrays.copyOf(tOffsets, columns);
+        for (int r = 0; r < rowCount(); r++) {
+            for (int i = offsets[r]; i < offsets[r + 1]; i++) {
+                place.place(i, r, fill[targets[i]]++);
+            }
+        }
+        return tOffsets;
+    }
+
+    /** Where an entry goes in a transpose; see {@link #transpose}. */
+    @FunctionalInterface
+    protected interface EntryPlacement {
+        /** Entry {@code entry} of row {@code row} goes to {@code slot} of the transpose. */
+        void place(int entry, int row, int slot);
     }
 }

@@ -166,18 +166,12 @@ public final class JsonReportWriter {
 
     /** {@code cw_check}: the verdict, with its reason when it gave one, or null when no check was made. */
     static void writeCwCheck(JsonGenerator json, Optional<CwPosetVerdict> check) throws IOException {
-        json.writeFieldName("cw_check");
-        if (check.isEmpty()) {
-            json.writeNull();
-            return;
-        }
-        CwPosetVerdict verdict = check.get();
-        json.writeStartObject();
-        json.writeBooleanField("cw_poset", verdict.isCwPoset());
-        if (!verdict.reason().isEmpty()) {
-            json.writeStringField("reason", verdict.reason());
-        }
-        json.writeEndObject();
+        JsonStyle.optionalObject(json, "cw_check", check, (j, verdict) -> {
+            j.writeBooleanField("cw_poset", verdict.isCwPoset());
+            if (!verdict.reason().isEmpty()) {
+                j.writeStringField("reason", verdict.reason());
+            }
+        });
     }
 
     private static void writeEngine(JsonGenerator json, Computation report) throws IOException {
@@ -197,21 +191,15 @@ public final class JsonReportWriter {
     }
 
     private static void writePosetReduction(JsonGenerator json, Optional<ReductionStats> stats) throws IOException {
-        json.writeFieldName("poset_reduction");
-        if (stats.isEmpty()) {
-            json.writeNull();
-            return;
-        }
-        ReductionStats s = stats.get();
-        json.writeStartObject();
-        json.writeNumberField("beat_points_removed", s.beatPointsRemoved());
-        json.writeNumberField("acyclic_links_removed", s.acyclicLinksRemoved());
-        json.writeNumberField("links_skipped", s.linksSkipped());
-        json.writeNumberField("elements_before", s.elementsBefore());
-        json.writeNumberField("elements_after", s.elementsAfter());
-        json.writeFieldName("ms");
-        json.writeNumber(BigDecimal.valueOf(s.milliseconds()).setScale(TIMING_DECIMALS, RoundingMode.HALF_UP));
-        json.writeEndObject();
+        JsonStyle.optionalObject(json, "poset_reduction", stats, (j, s) -> {
+            j.writeNumberField("beat_points_removed", s.beatPointsRemoved());
+            j.writeNumberField("acyclic_links_removed", s.acyclicLinksRemoved());
+            j.writeNumberField("links_skipped", s.linksSkipped());
+            j.writeNumberField("elements_before", s.elementsBefore());
+            j.writeNumberField("elements_after", s.elementsAfter());
+            j.writeFieldName("ms");
+            j.writeNumber(BigDecimal.valueOf(s.milliseconds()).setScale(TIMING_DECIMALS, RoundingMode.HALF_UP));
+        });
     }
 
     private static void writeImage(JsonGenerator json, ImageFacts image) throws IOException {

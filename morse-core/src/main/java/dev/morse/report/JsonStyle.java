@@ -13,6 +13,7 @@ import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.math.RoundingMode;
 import java.util.List;
+import java.util.Optional;
 
 /** The one JSON layout of every writer here: objects a field per line, arrays of numbers on one line. */
 final class JsonStyle {
@@ -26,6 +27,25 @@ final class JsonStyle {
     @FunctionalInterface
     interface Body {
         void write(JsonGenerator json) throws IOException;
+    }
+
+    /** Writes the fields of one value inside its object. */
+    @FunctionalInterface
+    interface Fields<T> {
+        void write(JsonGenerator json, T value) throws IOException;
+    }
+
+    /** Field {@code name}: null when {@code value} is empty, else an object of its {@code fields}. */
+    static <T> void optionalObject(JsonGenerator json, String name, Optional<T> value, Fields<T> fields)
+            throws IOException {
+        json.writeFieldName(name);
+        if (value.isEmpty()) {
+            json.writeNull();
+            return;
+        }
+        json.writeStartObject();
+        fields.write(json, value.get());
+        json.writeEndObject();
     }
 
     /** Indented JSON text from {@code body}, ending with a newline. */

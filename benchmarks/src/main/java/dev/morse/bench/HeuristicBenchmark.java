@@ -2,7 +2,7 @@ package dev.morse.bench;
 
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.cw.ComplexSelector;
+import dev.morse.engine.ComplexPolicy;
 import dev.morse.homology.Coefficients;
 import dev.morse.matching.Matching;
 import dev.morse.matching.MatchingHeuristic;
@@ -74,7 +74,7 @@ public class HeuristicBenchmark {
         ComplexChoice choice = ComplexChoice.parse(complex);
         if (input.startsWith(VOXELS)) {
             int side = Integer.parseInt(input.substring(VOXELS.length()));
-            cells = ComplexSelector.select(MorseTable.block(side).toPoset(), choice);
+            cells = ComplexPolicy.storedComplex(MorseTable.block(side).toPoset(), choice);
         } else {
             cells = ComplexPolicy.plan(InputReaders.read(Path.of(input)), Request.defaults().withComplex(choice)
                     .withPosetReduction(false).withImplicit(ElementOrder.DOWN_SETS, 1L << 60)).stored().orElseThrow();

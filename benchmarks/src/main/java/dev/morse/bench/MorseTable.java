@@ -3,7 +3,7 @@ package dev.morse.bench;
 import dev.morse.progress.HeapPeaks;
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.cw.ComplexSelector;
+import dev.morse.engine.ComplexPolicy;
 import dev.morse.generate.VoxelBlock;
 import dev.morse.homology.Coefficients;
 import dev.morse.io.PosetReader;
@@ -63,7 +63,7 @@ public final class MorseTable {
         long t0 = System.nanoTime();
         Poset poset = PosetReader.read(file);
         long t1 = System.nanoTime();
-        ChainComplex complex = ComplexSelector.select(poset, ComplexChoice.AUTO);
+        ChainComplex complex = ComplexPolicy.storedComplex(poset, ComplexChoice.AUTO);
         long t2 = System.nanoTime();
         MorseReduction.Outcome outcome = MorseReduction.run(complex,
                 new MorseReduction.Request(heuristic, MatchingOptions.DEFAULT, Coefficients.INTEGERS, true));

@@ -2,7 +2,7 @@ package dev.morse.bench;
 
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.cw.ComplexSelector;
+import dev.morse.engine.ComplexPolicy;
 import dev.morse.generate.VoxelBlock;
 import dev.morse.homology.Coefficients;
 import dev.morse.matching.MatchingHeuristic;
@@ -27,7 +27,7 @@ public final class SpeedupTable {
         MatchingHeuristic none = MatchingHeuristics.byName("none").orElseThrow();
         for (int a = 1; a < args.length; a++) {
             VoxelBlock block = MorseTable.block(Integer.parseInt(args[a]));
-            ChainComplex complex = ComplexSelector.select(block.toPoset(), ComplexChoice.AUTO);
+            ChainComplex complex = ComplexPolicy.storedComplex(block.toPoset(), ComplexChoice.AUTO);
             double baseline = best(complex, none, block);
             double reduced = best(complex, fast, block);
             System.out.printf(java.util.Locale.ROOT, "| %d^3 | %,d | %.1f | %.2f | %.0fx |%n", block.side(),

@@ -6,6 +6,7 @@ import dev.morse.poset.Poset;
 import dev.morse.progress.Progress;
 import java.util.Arrays;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.Optional;
 
 /**
  * Decides whether a poset is a CW poset, the face poset of a regular CW complex (Björner,
@@ -65,6 +66,18 @@ public final class CwPosetCheck {
             throw new IllegalArgumentException(structure.verdict().reason());
         }
         return CellularComplex.withIncidences(poset, structure.coverSigns());
+    }
+
+    /**
+     * Analyses the poset once and builds the cellular complex if it is a CW poset; builds no order
+     * complex, so a caller can decide whether to store one.
+     */
+    public static CellularAttempt tryCellular(Poset poset) {
+        CwStructure structure = analyse(poset);
+        CwPosetVerdict verdict = structure.verdict();
+        return new CellularAttempt(verdict, verdict.isCwPoset()
+                ? Optional.of(CellularComplex.withIncidences(poset, structure.coverSigns()))
+                : Optional.empty());
     }
 
     /** Whether {@code poset} is a CW poset, with the first failure's reason if not. */

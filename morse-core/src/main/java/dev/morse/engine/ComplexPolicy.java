@@ -6,7 +6,7 @@ import dev.morse.complex.ComplexKind;
 import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.cw.CellularAttempt;
-import dev.morse.cw.ComplexSelector;
+import dev.morse.cw.CwPosetCheck;
 import dev.morse.cw.CwPosetVerdict;
 import dev.morse.image.CubicalComplex;
 import dev.morse.input.FacetInput;
@@ -67,6 +67,21 @@ public final class ComplexPolicy {
         }
     }
 
+    /**
+     * The stored complex that {@code choice} asks for of {@code poset} as it is: no poset reduction,
+     * and the order complex stored whatever its number of chains. For studying one complex, as the
+     * property tests and benchmarks do; commands go through {@link #plan}.
+     *
+     * @throws InputException as {@link #plan} does, naming the input {@code poset}
+     * @throws IllegalArgumentException for {@link ComplexChoice#IMPLICIT}, which stores no complex
+     */
+    public static ChainComplex storedComplex(Poset poset, ComplexChoice choice) {
+        Request request = Request.defaults().withComplex(choice).withPosetReduction(false)
+                .withImplicit(Request.defaults().elementOrder(), 1L << 60);
+        return plan(new PosetInput("poset", poset, 0), request).stored().orElseThrow(() -> new IllegalArgumentException(
+                "the implicit order complex stores no cells; the implicit engine computes its homology"));
+    }
+
     private static Request onlyAuto(Input input, Request request, String what) {
         if (request.complex() != ComplexChoice.AUTO) {
             throw new InputException(input.source(), InputException.NO_LINE,
@@ -96,7 +111,7 @@ public final class ComplexPolicy {
                 return implicit(shrunk, new long[0], "", Optional.empty(), top, start);
             }
             case CELLULAR, AUTO -> {
-                CellularAttempt attempt = ComplexSelector.tryCellular(poset);
+                CellularAttempt attempt = CwPosetCheck.tryCellular(poset);
                 CwPosetVerdict verdict = attempt.verdict();
                 if (attempt.cellular().isPresent()) {
                     ChainComplex cellular = attempt.cellular().get();

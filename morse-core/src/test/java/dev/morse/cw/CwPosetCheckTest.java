@@ -1,5 +1,7 @@
 package dev.morse.cw;
 
+import dev.morse.engine.ComplexPolicy;
+import dev.morse.io.InputException;
 import dev.morse.complex.CellularComplex;
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
@@ -54,13 +56,14 @@ public class CwPosetCheckTest {
         // complex; the order complex is the single edge v<e, contractible
         Poset loop = Fixtures.poset("e: v\n");
         assertFails(loop, "'e'", "only 'v'");
-        ChainComplex chosen = ComplexSelector.select(loop, ComplexChoice.AUTO);
+        ChainComplex chosen = ComplexPolicy.storedComplex(loop, ComplexChoice.AUTO);
         assertEquals(ComplexKind.ORDER, chosen.kind());
         Fixtures.assertChainComplex(chosen);
         assertEquals(List.of("Z", "0"), Fixtures.homology(chosen));
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> ComplexSelector.select(loop, ComplexChoice.CELLULAR));
-        assertEquals(CwPosetCheck.check(loop).reason(), e.getMessage());
+        InputException e = assertThrows(InputException.class,
+                () -> ComplexPolicy.storedComplex(loop, ComplexChoice.CELLULAR));
+        assertEquals("poset: the cellular complex needs a CW poset, and this is not one: "
+                + CwPosetCheck.check(loop).reason(), e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> CwPosetCheck.cellularComplex(loop));
     }
 
@@ -69,7 +72,7 @@ public class CwPosetCheckTest {
         // S^1 with two vertices and two edges: H = Z, Z (standard)
         Poset circle = Fixtures.poset(CIRCLE);
         assertTrue(CwPosetCheck.check(circle).isCwPoset());
-        ChainComplex chosen = ComplexSelector.select(circle, ComplexChoice.AUTO);
+        ChainComplex chosen = ComplexPolicy.storedComplex(circle, ComplexChoice.AUTO);
         assertEquals(ComplexKind.CELLULAR, chosen.kind());
         assertEquals(4, chosen.cellCount());
         Fixtures.assertChainComplex(chosen);
@@ -194,7 +197,7 @@ public class CwPosetCheckTest {
     @Test
     void orderChoiceIsHonouredOnACwPoset() {
         // the barycentric subdivision of the square: 9 vertices, 16 edges, 8 triangles (standard)
-        ChainComplex order = ComplexSelector.select(Fixtures.poset(SQUARE), ComplexChoice.ORDER);
+        ChainComplex order = ComplexPolicy.storedComplex(Fixtures.poset(SQUARE), ComplexChoice.ORDER);
         assertEquals(ComplexKind.ORDER, order.kind());
         Fixtures.assertChainComplex(order);
         assertEquals(List.of(9, 16, 8), List.of(order.cellCount(0), order.cellCount(1), order.cellCount(2)));

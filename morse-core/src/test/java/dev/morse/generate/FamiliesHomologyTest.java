@@ -9,7 +9,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.cw.ComplexSelector;
+import dev.morse.engine.ComplexPolicy;
 import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.homology.Coefficients;
@@ -44,7 +44,7 @@ class FamiliesHomologyTest {
         String text = text(generated);
         return generated.format() == InputFormat.SIMPLICIAL
                 ? homology(SimplicialComplex.of(SimplicialReader.parse(text, "generated")))
-                : homology(ComplexSelector.select(PosetReader.parse(text, "generated"), ComplexChoice.AUTO));
+                : homology(ComplexPolicy.storedComplex(PosetReader.parse(text, "generated"), ComplexChoice.AUTO));
     }
 
     static String text(Generated generated) {

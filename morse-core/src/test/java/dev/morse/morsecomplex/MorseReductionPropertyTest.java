@@ -7,7 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.complex.ChainComplex;
 import dev.morse.complex.ComplexChoice;
-import dev.morse.cw.ComplexSelector;
+import dev.morse.engine.ComplexPolicy;
 import dev.morse.complex.OrderComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.generate.CrossPolytopeFaces;
@@ -84,7 +84,7 @@ class MorseReductionPropertyTest {
             Poset p = random.nextBoolean()
                     ? RandomInputs.cubical(random, 2, 2, 1, 0.7)
                     : RandomInputs.poset(random, 5 + random.nextInt(5), 0.4);
-            return ComplexSelector.select(p, ComplexChoice.AUTO);
+            return ComplexPolicy.storedComplex(p, ComplexChoice.AUTO);
         });
     }
 

@@ -17,7 +17,8 @@ import java.util.concurrent.atomic.AtomicLong;
 /**
  * Sweeps every interval {@code x < y} of P̂ in a fixed order (shortest intervals first, then by the ids
  * of their ends), solving each with an {@link IntervalSolver}, on a bounded pool of threads that take
- * intervals in that order. Results are kept by their place in the order, so they never depend on the
+ * intervals from the end of that order, longest first, or from its start with {@code firstFailure}.
+ * Results are kept by their place in the order, so they never depend on the
  * number of threads; with {@code firstFailure} every interval before the first failing one is still
  * solved, so the witness is the same too. The Möbius function of every interval
  * ({@link MobiusTable}) is checked against the reduced Euler characteristic of the interval's order
@@ -101,7 +102,10 @@ public final class IntervalSweep {
         };
     }
 
-    /** Solves intervals in order until all are done or, with firstFailure, the first failure; returns how many. */
+    /**
+     * Solves intervals until all are done or, with firstFailure, in order until the first failure;
+     * returns how many of the first are done.
+     */
     private static int solveAll(PosetWithBounds hat, String source, SweepOptions options, long[] order,
             IntervalResult[] results) {
         AtomicInteger next = new AtomicInteger();
@@ -126,10 +130,13 @@ public final class IntervalSweep {
                         if (start >= cutoff.get()) {
                             return null;
                         }
-                        for (int i = start; i < Math.min(start + CHUNK, order.length); i++) {
-                            if (i >= cutoff.get()) {
+                        for (int p = start; p < Math.min(start + CHUNK, order.length); p++) {
+                            if (p >= cutoff.get()) {
                                 break;
                             }
+                            // without a cutoff the longest intervals go first, so that no thread is
+                            // left alone with the largest at the end (longest processing time first)
+                            int i = options.firstFailure() ? p : order.length - 1 - p;
                             IntervalResult r = solver.solve(task(order[i]));
                             IntervalHomology h = shared.computeIfAbsent(r.homology(), key -> key);
                             results[i] = new IntervalResult(r.task(), r.dimension(), r.graded(), h, r.how());

@@ -35,6 +35,15 @@ final class FreeFaceState {
         return !removed[t] && cofacesLeft[t] == 1;
     }
 
+    /** Hands every free face of the complex as it is now to {@code sink}, in ascending order. */
+    void offerFreeFaces(IntConsumer sink) {
+        for (int c = 0; c < removed.length; c++) {
+            if (isFree(c)) {
+                sink.accept(c);
+            }
+        }
+    }
+
     boolean isRemoved(int c) {
         return removed[c];
     }

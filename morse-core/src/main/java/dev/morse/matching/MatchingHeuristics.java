@@ -16,6 +16,34 @@ public final class MatchingHeuristics {
     /** The heuristic used when none is named. */
     public static final String DEFAULT = "coreduction";
 
+    /** Coreduction (Mrozek and Batko 2009): see {@link CoreductionPairing}. The default. */
+    public static final MatchingHeuristic COREDUCTION = MatchingHeuristic.named(DEFAULT, false, new CoreductionPairing());
+    /** Elementary collapses, top-down (Whitehead; Forman): see {@link CollapsePairing}. */
+    public static final MatchingHeuristic COLLAPSE = MatchingHeuristic.named("collapse", false, new CollapsePairing());
+    /** Greedy pairing in the lexicographic order of vertex tuples: see {@link LexicographicPairing}. */
+    public static final MatchingHeuristic LEXICOGRAPHIC = MatchingHeuristic.named("lexicographic", false,
+            new LexicographicPairing());
+    /** Random discrete Morse theory (Benedetti and Lutz 2014), seeded: see {@link RandomPairing}. */
+    public static final MatchingHeuristic RANDOM = MatchingHeuristic.named("random", true, new RandomPairing());
+    /** Every cell critical: the full Smith normal form baseline and oracle. */
+    public static final MatchingHeuristic NONE = MatchingHeuristic.named("none", false,
+            (complex, options) -> Matching.empty(complex.cellCount()));
+    /** Reverse lexicographic collapses: see {@link LastFreeFacePairing}. */
+    public static final MatchingHeuristic LAST_FREE_FACE = MatchingHeuristic.named("last-free-face", false,
+            new LastFreeFacePairing());
+    /** Reverse lexicographic collapses with a greedy critical cell: see {@link FreeingCollapsePairing}. */
+    public static final MatchingHeuristic FREEING_COLLAPSE = MatchingHeuristic.named("freeing-collapse", false,
+            new FreeingCollapsePairing());
+    /**
+     * The optimal Morse matching of {@link OptimalMatchingSolver} (Joswig and Pfetsch 2006): proven
+     * optimal when the solver finishes within {@link MatchingOptions#timeLimit()}, otherwise the best
+     * matching found by then. Callers that need the proof status or the bound call
+     * {@link OptimalMatchingSolver#solve} directly. The seed only steers the random starting
+     * heuristic, so repeated trials would at most trade one optimal matching for another: not randomised.
+     */
+    public static final MatchingHeuristic OPTIMAL = MatchingHeuristic.named("optimal", false,
+            (complex, options) -> OptimalMatchingSolver.solve(complex, options).matching());
+
     private MatchingHeuristics() {
     }
 
@@ -62,7 +90,7 @@ public final class MatchingHeuristics {
      * library. A fresh list each call.
      */
     public static List<MatchingHeuristic> onRequest() {
-        return List.of(new LastFreeFaceHeuristic(), new FreeingCollapseHeuristic(), new OptimalHeuristic());
+        return List.of(LAST_FREE_FACE, FREEING_COLLAPSE, OPTIMAL);
     }
 
     /** {@link #all()} followed by {@link #onRequest()}, by name. A fresh unmodifiable map each call. */
@@ -80,8 +108,7 @@ public final class MatchingHeuristics {
     }
 
     private static List<MatchingHeuristic> builtIn() {
-        return List.of(new CoreductionHeuristic(), new CollapseHeuristic(), new LexicographicHeuristic(),
-                new RandomHeuristic(), new NoMatchingHeuristic());
+        return List.of(COREDUCTION, COLLAPSE, LEXICOGRAPHIC, RANDOM, NONE);
     }
 
     /** The names on offer, in order. */

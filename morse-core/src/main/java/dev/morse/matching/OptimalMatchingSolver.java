@@ -259,11 +259,12 @@ public final class OptimalMatchingSolver {
 
     /** The heuristics whose best matching starts the search. */
     static List<MatchingHeuristic> startingHeuristics(int cellCount) {
-        List<MatchingHeuristic> list = new ArrayList<>(List.of(new CoreductionHeuristic(), new CollapseHeuristic(),
-                new RandomHeuristic(), new LastFreeFaceHeuristic(), new FreeingCollapseHeuristic()));
+        List<MatchingHeuristic> list = new ArrayList<>(List.of(MatchingHeuristics.COREDUCTION,
+                MatchingHeuristics.COLLAPSE, MatchingHeuristics.RANDOM, MatchingHeuristics.LAST_FREE_FACE,
+                MatchingHeuristics.FREEING_COLLAPSE));
         if (cellCount <= MODEL_CELL_LIMIT) {
             // quadratic in the worst case, so only where an integer program would be built anyway
-            list.add(new LexicographicHeuristic());
+            list.add(MatchingHeuristics.LEXICOGRAPHIC);
         }
         return list;
     }

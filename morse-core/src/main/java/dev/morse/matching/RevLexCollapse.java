@@ -18,14 +18,10 @@ final class RevLexCollapse {
     private int pairs;
 
     RevLexCollapse(ChainComplex complex) {
-        rank = LastFreeFaceHeuristic.lexicographicRanks(complex);
+        rank = LexicographicPairing.lexicographicRanks(complex);
         state = new FreeFaceState(complex);
         freeFaces = new IntHeapPriorityQueue((a, b) -> Integer.compare(rank[b], rank[a]));
-        for (int c = 0; c < complex.cellCount(); c++) {
-            if (state.isFree(c)) {
-                freeFaces.enqueue(c);
-            }
-        }
+        state.offerFreeFaces(freeFaces::enqueue);
     }
 
     /** The position of each cell in the lexicographic order of vertex tuples. */

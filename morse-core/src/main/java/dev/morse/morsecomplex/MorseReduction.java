@@ -10,7 +10,7 @@ import dev.morse.matching.MatchingHeuristic;
 import dev.morse.matching.MatchingOptions;
 import dev.morse.matching.MatchingVerdict;
 import dev.morse.matching.MatchingVerifier;
-import dev.morse.matching.NoMatchingHeuristic;
+import dev.morse.matching.MatchingHeuristics;
 import dev.morse.progress.Progress;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -111,7 +111,7 @@ public final class MorseReduction {
             verdict = MatchingVerifier.requireValid(complex, matching, request.heuristic(), request.options().seed());
             times.put("verify", millis(t1, System.nanoTime()));
         }
-        if (request.heuristic() instanceof NoMatchingHeuristic) {
+        if (request.heuristic() == MatchingHeuristics.NONE) {
             return onEveryCell(complex, matching, verdict, request, times, "homology");
         }
         long t2 = System.nanoTime();

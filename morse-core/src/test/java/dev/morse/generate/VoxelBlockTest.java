@@ -1,5 +1,6 @@
 package dev.morse.generate;
 
+import dev.morse.matching.MatchingHeuristics;
 import dev.morse.cw.CwPosetCheck;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
@@ -8,7 +9,6 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import dev.morse.complex.CellularComplex;
 import dev.morse.homology.Coefficients;
-import dev.morse.matching.CoreductionHeuristic;
 import dev.morse.matching.MatchingOptions;
 import dev.morse.morsecomplex.MorseReduction;
 import dev.morse.io.PosetReader;
@@ -26,7 +26,7 @@ class VoxelBlockTest {
         // genus-2 handlebody with four sealed cavities: H = Z, Z^2, Z^4, 0 (Alexander duality; see VoxelBlock)
         VoxelBlock block = VoxelBlock.of(11, 2, 4);
         CellularComplex complex = CwPosetCheck.cellularComplex(block.toPoset());
-        MorseReduction.Outcome outcome = MorseReduction.run(complex, new MorseReduction.Request(new CoreductionHeuristic(),
+        MorseReduction.Outcome outcome = MorseReduction.run(complex, new MorseReduction.Request(MatchingHeuristics.COREDUCTION,
                 MatchingOptions.DEFAULT, Coefficients.INTEGERS, true));
         assertEquals(block.expectedHomology(), outcome.homology().groups());
     }

@@ -1,7 +1,7 @@
 package dev.morse.matching;
 
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -13,9 +13,9 @@ class MatchingHeuristicsTest {
         // names() is what runs by default (compare, the property tests): the exact solver is not in it
         assertEquals(List.of("coreduction", "collapse", "lexicographic", "random", "none"),
                 MatchingHeuristics.builtInNames());
-        assertInstanceOf(OptimalHeuristic.class, MatchingHeuristics.byName("optimal").orElseThrow());
-        assertInstanceOf(LastFreeFaceHeuristic.class, MatchingHeuristics.byName("last-free-face").orElseThrow());
-        assertInstanceOf(FreeingCollapseHeuristic.class, MatchingHeuristics.byName("freeing-collapse").orElseThrow());
+        assertSame(MatchingHeuristics.OPTIMAL, MatchingHeuristics.byName("optimal").orElseThrow());
+        assertSame(MatchingHeuristics.LAST_FREE_FACE, MatchingHeuristics.byName("last-free-face").orElseThrow());
+        assertSame(MatchingHeuristics.FREEING_COLLAPSE, MatchingHeuristics.byName("freeing-collapse").orElseThrow());
         assertTrue(MatchingHeuristics.byName("steepest").isEmpty());
         assertTrue(!MatchingHeuristics.names().contains("optimal"));
     }

@@ -35,8 +35,8 @@ class OptimalMatchingPropertyTest {
     void theOptimumLiesBetweenTheMorseBoundAndEveryHeuristic() {
         SplittableRandom random = new SplittableRandom(2006);
         List<MatchingHeuristic> heuristics = new ArrayList<>(MatchingHeuristics.all().values());
-        heuristics.add(new LastFreeFaceHeuristic());
-        heuristics.add(new FreeingCollapseHeuristic());
+        heuristics.add(MatchingHeuristics.LAST_FREE_FACE);
+        heuristics.add(MatchingHeuristics.FREEING_COLLAPSE);
         int exhaustive = 0;
         int programs = 0;
         for (int i = 0; i < 240; i++) {
@@ -77,7 +77,7 @@ class OptimalMatchingPropertyTest {
         for (int i = 0; i < 300; i++) {
             ChainComplex complex = randomComplex(random, i);
             Homology oracle = HomologyCalculator.compute(complex, Coefficients.INTEGERS);
-            for (MatchingHeuristic h : List.of(new LastFreeFaceHeuristic(), new FreeingCollapseHeuristic())) {
+            for (MatchingHeuristic h : List.of(MatchingHeuristics.LAST_FREE_FACE, MatchingHeuristics.FREEING_COLLAPSE)) {
                 MorseReduction.Outcome outcome = MorseReduction.run(complex,
                         new MorseReduction.Request(h, MatchingOptions.DEFAULT, Coefficients.INTEGERS, true));
                 assertEquals(oracle, outcome.homology(), "case " + i + " with " + h.name());

@@ -1,5 +1,6 @@
 package dev.morse.morsecomplex;
 
+import dev.morse.matching.MatchingHeuristics;
 import dev.morse.cw.CwPosetCheck;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
@@ -15,7 +16,6 @@ import dev.morse.complex.ListedComplex;
 import dev.morse.generate.ProjectiveSpace;
 import dev.morse.homology.Coefficients;
 import dev.morse.homology.HomologyGroup;
-import dev.morse.matching.CoreductionHeuristic;
 import dev.morse.matching.Matching;
 import dev.morse.matching.MatchingOptions;
 import dev.morse.matching.MatchingVerifier;
@@ -30,7 +30,7 @@ class GradientSweepTest {
         // RP^2 has a CW structure with one cell per dimension and ∂_2 = ±2, ∂_1 = 0 (Hatcher 2002, Example 2.42);
         // a perfect matching on the antipodal cube quotient must produce exactly that Morse complex
         CellularComplex rp2 = CwPosetCheck.cellularComplex(ProjectiveSpace.antipodalCubeQuotient(2));
-        Matching matching = new CoreductionHeuristic().match(rp2, MatchingOptions.DEFAULT);
+        Matching matching = MatchingHeuristics.COREDUCTION.match(rp2, MatchingOptions.DEFAULT);
         assertEquals(true, MatchingVerifier.verify(rp2, matching).valid());
         MorseComplex morse = GradientSweep.build(rp2, matching);
         assertArrayEquals(new int[] {1, 1, 1}, morse.cellCounts());

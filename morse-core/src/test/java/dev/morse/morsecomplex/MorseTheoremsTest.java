@@ -16,11 +16,9 @@ import dev.morse.generate.SimplexFaces;
 import dev.morse.generate.Skeleton;
 import dev.morse.generate.Triangulations;
 import dev.morse.homology.Coefficients;
-import dev.morse.matching.CoreductionHeuristic;
 import dev.morse.matching.MatchingHeuristic;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
-import dev.morse.matching.NoMatchingHeuristic;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -29,7 +27,7 @@ import org.junit.jupiter.api.Test;
 class MorseTheoremsTest {
 
     private static MorseReduction.Outcome coreduce(ChainComplex complex) {
-        return MorseReduction.run(complex, new MorseReduction.Request(new CoreductionHeuristic(), MatchingOptions.DEFAULT,
+        return MorseReduction.run(complex, new MorseReduction.Request(MatchingHeuristics.COREDUCTION, MatchingOptions.DEFAULT,
                 Coefficients.INTEGERS, true));
     }
 
@@ -90,7 +88,7 @@ class MorseTheoremsTest {
     void noMatchingLeavesEveryCellCritical() {
         // the baseline pairs nothing (DESIGN: with --matching none, critical equals cells)
         ChainComplex torus = SimplicialComplex.of(Triangulations.torus7());
-        MorseReduction.Outcome outcome = MorseReduction.run(torus, new MorseReduction.Request(new NoMatchingHeuristic(),
+        MorseReduction.Outcome outcome = MorseReduction.run(torus, new MorseReduction.Request(MatchingHeuristics.NONE,
                 MatchingOptions.DEFAULT, Coefficients.INTEGERS, true));
         assertArrayEquals(torus.cellCounts(), outcome.critical());
         // torus: f = (7, 21, 14) for the 7-vertex triangulation (Möbius 1861 / Császár); H = Z, Z^2, Z

@@ -11,32 +11,17 @@ import java.util.SplittableRandom;
  * chosen uniformly at random; when none is left, remove a uniformly random cell of the top dimension
  * left and declare it critical. Seeded by {@link MatchingOptions#seed()}, so a seed repeats its run.
  *
- * <p>Acyclic for the same reason as {@link CollapseHeuristic}. Linear time in expectation;
+ * <p>Acyclic for the same reason as {@link CollapsePairing}. Linear time in expectation;
  * about 17 bytes per cell of working memory besides the coboundary.
  */
-public final class RandomHeuristic implements MatchingHeuristic {
-    @Override
-    public String name() {
-        return "random";
-    }
-
-    /** Each seed gives its own run. */
-    @Override
-    public boolean randomized() {
-        return true;
-    }
-
+final class RandomPairing implements MatchingHeuristic.Pairing {
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
         SplittableRandom random = new SplittableRandom(options.seed());
         int n = complex.cellCount();
         FreeFaceState state = new FreeFaceState(complex);
         IntArrayList freeFaces = new IntArrayList();
-        for (int c = 0; c < n; c++) {
-            if (state.isFree(c)) {
-                freeFaces.add(c);
-            }
-        }
+        state.offerFreeFaces(freeFaces::add);
         int[] shuffled = shuffledByDimension(complex, random);
         int next = n - 1;
         Progress progress = Progress.current();

@@ -5,23 +5,18 @@ import dev.morse.complex.ChainComplex;
 
 /**
  * Collapses with a greedy choice of critical cells. Free faces are collapsed in reverse lexicographic
- * order, as in {@link LastFreeFaceHeuristic} (Benedetti and Lutz, Exp. Math. 23, 2014). When none is
+ * order, as in {@link LastFreeFacePairing} (Benedetti and Lutz, Exp. Math. 23, 2014). When none is
  * left, the cell declared critical is, among the cells of the highest dimension left, one whose
  * removal frees the most faces (faces with exactly two cofaces left), ties going to the
  * lexicographically last. This choice rule is ours, not from the literature: a critical cell that
  * frees no face lets collapsing stop again at once; benchmarks/RESULTS.md measures its effect on the
  * hard library.
  *
- * <p>Acyclic for the same reason as {@link CollapseHeuristic}. Each critical choice scans the cells
+ * <p>Acyclic for the same reason as {@link CollapsePairing}. Each critical choice scans the cells
  * of the current top dimension, so the time is O(N · c) for c critical cells of that kind; about 21
  * bytes per cell of working memory besides the coboundary.
  */
-public final class FreeingCollapseHeuristic implements MatchingHeuristic {
-    @Override
-    public String name() {
-        return "freeing-collapse";
-    }
-
+final class FreeingCollapsePairing implements MatchingHeuristic.Pairing {
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
         RevLexCollapse collapse = new RevLexCollapse(complex);

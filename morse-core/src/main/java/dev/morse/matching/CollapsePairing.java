@@ -16,22 +16,13 @@ import it.unimi.dsi.fastutil.ints.IntArrayFIFOQueue;
  * cell of a pair had no other coface left at its removal. Linear time; 9 bytes per cell of working
  * memory besides the coboundary.
  */
-public final class CollapseHeuristic implements MatchingHeuristic {
-    @Override
-    public String name() {
-        return "collapse";
-    }
-
+final class CollapsePairing implements MatchingHeuristic.Pairing {
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
         int n = complex.cellCount();
         FreeFaceState state = new FreeFaceState(complex);
         IntArrayFIFOQueue queue = new IntArrayFIFOQueue();
-        for (int c = 0; c < n; c++) {
-            if (state.isFree(c)) {
-                queue.enqueue(c);
-            }
-        }
+        state.offerFreeFaces(queue::enqueue);
         int next = n - 1;
         Progress progress = Progress.current();
         int pairs = 0;

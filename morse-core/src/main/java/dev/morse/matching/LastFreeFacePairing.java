@@ -11,16 +11,11 @@ import it.unimi.dsi.fastutil.ints.IntArrays;
  * lexicographically last. When no free face is left, the lexicographically last cell of the highest
  * dimension left is declared critical and removed, and collapsing resumes.
  *
- * <p>Acyclic for the same reason as {@link CollapseHeuristic}: along a gradient path each step
+ * <p>Acyclic for the same reason as {@link CollapsePairing}: along a gradient path each step
  * reaches a pair removed strictly later. O(N log N) time; about 21 bytes per cell of working memory
  * besides the coboundary and the vertex tuples used once for the order.
  */
-public final class LastFreeFaceHeuristic implements MatchingHeuristic {
-    @Override
-    public String name() {
-        return "last-free-face";
-    }
-
+final class LastFreeFacePairing implements MatchingHeuristic.Pairing {
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
         int n = complex.cellCount();
@@ -46,15 +41,5 @@ public final class LastFreeFaceHeuristic implements MatchingHeuristic {
             }
             collapse.makeCritical(byDimensionThenRank[next]);
         }
-    }
-
-    /** The position of each cell in the lexicographic order of vertex tuples. */
-    static int[] lexicographicRanks(ChainComplex complex) {
-        int[] order = LexicographicHeuristic.lexicographicOrder(complex);
-        int[] rank = new int[order.length];
-        for (int i = 0; i < order.length; i++) {
-            rank[order[i]] = i;
-        }
-        return rank;
     }
 }

@@ -18,12 +18,7 @@ import java.util.Arrays;
  * strictly earlier, since the coface of a pair had no other face left at its removal.
  * Linear time; 9 bytes per cell of working memory besides the coboundary.
  */
-public final class CoreductionHeuristic implements MatchingHeuristic {
-    @Override
-    public String name() {
-        return "coreduction";
-    }
-
+final class CoreductionPairing implements MatchingHeuristic.Pairing {
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
         int n = complex.cellCount();

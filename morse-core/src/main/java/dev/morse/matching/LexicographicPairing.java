@@ -20,22 +20,14 @@ import java.util.Arrays;
  * back to the lower one; the search stays within the two dimensions involved. Quadratic in the worst
  * case, so meant for comparisons rather than the largest inputs. 12 bytes per cell of working memory.
  */
-public final class LexicographicHeuristic implements MatchingHeuristic {
-    @Override
-    public String name() {
-        return "lexicographic";
-    }
-
+final class LexicographicPairing implements MatchingHeuristic.Pairing {
     @Override
     public Matching match(ChainComplex complex, MatchingOptions options) {
-        int n = complex.cellCount();
+        int[] order = lexicographicOrder(complex);
+        int n = order.length;
+        int[] rank = positions(order);
         Boundary boundary = complex.boundary();
         Boundary coboundary = complex.coboundary();
-        int[] order = lexicographicOrder(complex);
-        int[] rank = new int[n];
-        for (int i = 0; i < n; i++) {
-            rank[order[i]] = i;
-        }
         int[] mates = new int[n];
         Arrays.fill(mates, Matching.CRITICAL);
         int[] stamp = new int[n];
@@ -72,6 +64,20 @@ public final class LexicographicHeuristic implements MatchingHeuristic {
             }
         }
         return Matching.adopt(mates);
+    }
+
+    /** The position of each cell in the lexicographic order of vertex tuples. */
+    static int[] lexicographicRanks(ChainComplex complex) {
+        return positions(lexicographicOrder(complex));
+    }
+
+    /** The inverse permutation: where each cell stands in {@code order}. */
+    private static int[] positions(int[] order) {
+        int[] position = new int[order.length];
+        for (int i = 0; i < order.length; i++) {
+            position[order[i]] = i;
+        }
+        return position;
     }
 
     /** The cells in the lexicographic order of their vertex tuples. */

@@ -1,6 +1,7 @@
 package dev.morse.image;
 
 import dev.morse.io.InputException;
+import dev.morse.io.InputFiles;
 import java.io.BufferedInputStream;
 import java.io.IOException;
 import java.io.InputStream;
@@ -133,14 +134,7 @@ public final class ImageInput {
     }
 
     private static GreyImage readImage(Path file) throws IOException {
-        String source = file.toString();
-        if (!Files.exists(file)) {
-            throw new InputException(source, InputException.NO_LINE, "no such file");
-        }
-        if (Files.isDirectory(file)) {
-            throw new InputException(source, InputException.NO_LINE, "is a directory, not an image file");
-        }
-        try {
+        return InputFiles.readChecked(file, "an image file", () -> {
             byte[] head = head(file);
             if (NetpbmReader.hasMagic(head)) {
                 return NetpbmReader.read(file);
@@ -148,13 +142,9 @@ public final class ImageInput {
             if (StandardImageReader.hasSignature(head)) {
                 return StandardImageReader.read(file);
             }
-        } catch (AccessDeniedException e) {
-            throw new InputException(source, InputException.NO_LINE, "cannot be read: permission denied");
-        } catch (NoSuchFileException e) {
-            throw new InputException(source, InputException.NO_LINE, "no such file");
-        }
-        throw new InputException(source, InputException.NO_LINE,
-                "not an image: expected a Netpbm (P1 to P6), PNG, GIF, BMP or JPEG file");
+            throw new InputException(file.toString(), InputException.NO_LINE,
+                    "not an image: expected a Netpbm (P1 to P6), PNG, GIF, BMP or JPEG file");
+        });
     }
 
     private static LoadedImage raw(Path file, VolumeSize size, ImageOptions options) throws IOException {

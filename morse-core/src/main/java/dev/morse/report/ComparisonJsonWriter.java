@@ -28,10 +28,7 @@ public final class ComparisonJsonWriter {
 
     /** The report as indented JSON text ending with a newline. */
     public static String toJson(ComparisonReport report) {
-        return JsonStyle.toText(json -> {
-            json.writeStartObject();
-            json.writeStringField("input", report.input());
-            json.writeStringField("format", report.format().name().toLowerCase(Locale.ROOT));
+        return JsonStyle.inputObject(report.input(), report.format().name().toLowerCase(Locale.ROOT), json -> {
             json.writeStringField("complex", report.complex().reportName());
             JsonStyle.intArray(json, "cells", report.cells());
             JsonReportWriter.writeCwCheck(json, report.cwCheck());
@@ -56,7 +53,6 @@ public final class ComparisonJsonWriter {
                 writeRun(json, report, run);
             }
             json.writeEndArray();
-            json.writeEndObject();
         });
     }
 

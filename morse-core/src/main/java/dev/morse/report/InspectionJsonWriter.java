@@ -31,10 +31,7 @@ public final class InspectionJsonWriter {
 
     /** The summary of poset file {@code input} as indented JSON ending with a newline. */
     public static String toJson(String input, PosetSummary s) {
-        return JsonStyle.toText(json -> {
-            json.writeStartObject();
-            json.writeStringField("input", input);
-            json.writeStringField("format", "poset");
+        return JsonStyle.inputObject(input, "poset", json -> {
             json.writeNumberField("elements", s.elements());
             json.writeNumberField("covers", s.covers());
             json.writeNumberField("minimal", s.minimal());
@@ -55,16 +52,12 @@ public final class InspectionJsonWriter {
                 json.writeNullField("chains");
                 json.writeStringField("chains_skipped", s.chainsSkipped());
             }
-            json.writeEndObject();
         });
     }
 
     /** The summary of simplicial file {@code input} as indented JSON ending with a newline. */
     public static String toJson(String input, SimplicialSummary s) {
-        return JsonStyle.toText(json -> {
-            json.writeStartObject();
-            json.writeStringField("input", input);
-            json.writeStringField("format", "simplicial");
+        return JsonStyle.inputObject(input, "simplicial", json -> {
             json.writeNumberField("vertices", s.vertices());
             json.writeNumberField("listed_faces", s.listedFaces());
             json.writeNumberField("dimension", s.dimension());
@@ -72,16 +65,12 @@ public final class InspectionJsonWriter {
             JsonStyle.intArray(json, "facets", s.facets());
             json.writeBooleanField("pure", s.pure());
             json.writeNumberField("euler_characteristic", s.eulerCharacteristic());
-            json.writeEndObject();
         });
     }
 
     /** The summary of image or volume {@code input} as indented JSON ending with a newline. */
     public static String toJson(String input, ImageSummary s) {
-        return JsonStyle.toText(json -> {
-            json.writeStartObject();
-            json.writeStringField("input", input);
-            json.writeStringField("format", s.isVolume() ? "volume" : "image");
+        return JsonStyle.inputObject(input, s.isVolume() ? "volume" : "image", json -> {
             JsonStyle.intArray(json, "size", s.size());
             json.writeNumberField("slices", s.slices());
             json.writeNumberField("foreground", s.foreground());
@@ -89,7 +78,6 @@ public final class InspectionJsonWriter {
             json.writeBooleanField("inverted", s.inverted());
             JsonStyle.intArray(json, "cells", s.cells());
             json.writeNumberField("euler_characteristic", s.eulerCharacteristic());
-            json.writeEndObject();
         });
     }
 

@@ -48,6 +48,20 @@ final class JsonStyle {
         json.writeEndObject();
     }
 
+    /**
+     * Indented JSON text of one object that starts with the {@code input} and its {@code format}
+     * and goes on with {@code fields}, ending with a newline.
+     */
+    static String inputObject(String input, String format, Body fields) {
+        return toText(json -> {
+            json.writeStartObject();
+            json.writeStringField("input", input);
+            json.writeStringField("format", format);
+            fields.write(json);
+            json.writeEndObject();
+        });
+    }
+
     /** Indented JSON text from {@code body}, ending with a newline. */
     static String toText(Body body) {
         return TextOutput.render(w -> write(w, body));

@@ -43,9 +43,10 @@ public final class IntervalSweep {
      */
     public static SweepReport run(PosetWithBounds hat, String source, SweepOptions options) {
         long[] order = sweepOrder(hat);
-        MobiusTable mobius = MobiusTable.of(hat);
         IntervalResult[] results = new IntervalResult[order.length];
-        int swept = solveAll(hat, source, options, order, results);
+        MobiusTable[] mobiusHolder = new MobiusTable[1];
+        int swept = solveAll(hat, source, options, order, results, () -> mobiusHolder[0] = MobiusTable.of(hat));
+        MobiusTable mobius = mobiusHolder[0];
         List<IntervalResult> kept = Arrays.asList(results).subList(0, swept);
         for (IntervalResult r : kept) {
             BigInteger mu = mobius.value(r.task().lower(), r.task().upper());
@@ -103,11 +104,11 @@ public final class IntervalSweep {
     }
 
     /**
-     * Solves intervals until all are done or, with firstFailure, in order until the first failure;
-     * returns how many of the first are done.
+     * Solves intervals until all are done or, with firstFailure, in order until the first failure, and
+     * runs {@code alongside} on the same threads; returns how many of the first intervals are done.
      */
     private static int solveAll(PosetWithBounds hat, String source, SweepOptions options, long[] order,
-            IntervalResult[] results) {
+            IntervalResult[] results, Runnable alongside) {
         AtomicInteger next = new AtomicInteger();
         AtomicInteger cutoff = new AtomicInteger(order.length);
         AtomicLong done = new AtomicLong();
@@ -122,6 +123,9 @@ public final class IntervalSweep {
         });
         try {
             List<Future<?>> workers = new ArrayList<>();
+            // the one job besides the intervals goes first: with several threads it overlaps the sweep,
+            // with one it runs before it, so the work is the same whatever the number of threads
+            workers.add(pool.submit(alongside));
             for (int w = 0; w < threads; w++) {
                 workers.add(pool.submit(() -> {
                     IntervalSolver solver = new IntervalSolver(hat, options.request(), source);

@@ -19,7 +19,7 @@ tiny="$root/corpus/loop.poset"
 "$root/morse-spark/morse-spark" intervals "$tiny" --json -q --master 'local[1]' >/dev/null 2>&1
 intervals="$("$root/morse-cli/morse" intervals "$input" --json -q | sed -n 's/^  "intervals": \([0-9]*\),$/\1/p')"
 
-best() {   # best wall seconds of "$@" over the repeats; output must equal the reference
+best() {   # best wall seconds of "$@" over the repeats
     local b=""
     for ((r = 0; r < repeats; r++)); do
         local s e t
@@ -33,7 +33,7 @@ best() {   # best wall seconds of "$@" over the repeats; output must equal the r
 }
 
 echo "uptime at start: $(uptime)"
-echo "input: Bruhat order of S_$n, proper part; $intervals intervals"
+echo "input: Bruhat order of S_$n, proper part; $intervals intervals; $repeats run(s) per cell"
 echo
 echo "| command | wall s, two-element poset | wall s, input | intervals per second (sweep alone) |"
 echo "|---|---|---|---|"
@@ -44,11 +44,11 @@ row() {
     total="$(best "$@" "$input")"
     printf '| %s | %.1f | %.1f | %.0f |\n' "$name" "$fixed" "$total" "$(echo "$intervals / ($total - $fixed)" | bc -l)"
 }
-cli() { "$root/morse-cli/morse" intervals "$3" --json -q --threads "$1"; }
-spark() { "$root/morse-spark/morse-spark" intervals "$3" --json -q --master "$1"; }
-row "morse intervals --threads 1" cli 1 x
-row "morse intervals --threads 2" cli 2 x
-row "morse-spark intervals --master local[1]" spark 'local[1]' x
-row "morse-spark intervals --master local[2]" spark 'local[2]' x
+cli() { "$root/morse-cli/morse" intervals "$2" --json -q --threads "$1"; }
+spark() { "$root/morse-spark/morse-spark" intervals "$2" --json -q --master "$1"; }
+row "morse intervals --threads 1" cli 1
+row "morse intervals --threads 2" cli 2
+row "morse-spark intervals --master local[1]" spark 'local[1]'
+row "morse-spark intervals --master local[2]" spark 'local[2]' 
 echo
 echo "uptime at end: $(uptime)"

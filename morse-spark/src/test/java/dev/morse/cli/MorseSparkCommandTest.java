@@ -76,6 +76,22 @@ class MorseSparkCommandTest {
     }
 
     @Test
+    void aFailedIntervalIsOneLineNamingItsEnds() {
+        // the chain a < b: P-hat is 0^ < a < b < 1^
+        dev.morse.poset.PosetBuilder b = new dev.morse.poset.PosetBuilder();
+        b.relate(b.element("a"), b.element("b"), 0);
+        dev.morse.interval.PosetWithBounds hat = dev.morse.interval.PosetWithBounds.of(b.buildKnownAcyclic());
+        List<dev.morse.spark.IntervalOutcome> failures = List.of(
+                new dev.morse.spark.IntervalOutcome(new dev.morse.interval.IntervalTask(hat.bottom(), hat.top()), null,
+                        "c.poset interval (0^, 1^): out of memory on the executor (512 MiB heap)"),
+                new dev.morse.spark.IntervalOutcome(new dev.morse.interval.IntervalTask(0, 1), null, "c.poset: x"));
+        assertEquals("{\"input\":\"c.poset\",\"lower\":null,\"upper\":null,\"error\":"
+                + "\"c.poset interval (0^, 1^): out of memory on the executor (512 MiB heap)\"}\n"
+                + "{\"input\":\"c.poset\",\"lower\":\"a\",\"upper\":\"b\",\"error\":\"c.poset: x\"}\n",
+                SparkIntervalsCommand.errorLines("c.poset", hat, failures));
+    }
+
+    @Test
     void anUnknownOptionIsOneLineAndExitCodeTwo() {
         Run there = run(MorseSparkCommand.newCommandLine(), "intervals", "x.poset", "--threads", "2");
         assertEquals(2, there.code());

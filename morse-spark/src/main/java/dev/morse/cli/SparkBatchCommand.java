@@ -45,6 +45,10 @@ final class SparkBatchCommand implements Callable<Integer> {
     @Mixin
     private MasterOption master;
 
+    // accepted so that the options of 'morse' work here too; the master sets how much runs at once
+    @Mixin
+    private ThreadsOption threads;
+
     @Option(names = "--cohen-macaulay", description = "Add \"cohen_macaulay\" to each line: the verdict of an interval"
             + " sweep over the coefficients, for posets and simplicial complexes (null for images).")
     private boolean cohenMacaulay;
@@ -55,6 +59,7 @@ final class SparkBatchCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         var request = engine.request(spec, runs, matching.name());
+        MasterOption.warnAboutThreads(spec);
         List<BatchItem> items = BatchRun.items(files);
         PrintWriter out = spec.commandLine().getOut();
         int failed;

@@ -30,9 +30,9 @@ import picocli.CommandLine.Spec;
 /**
  * {@code morse-spark intervals FILE}: {@code morse intervals} with the intervals solved on Spark. The
  * options and the output are those of {@code morse intervals}, with {@code --master} in place of
- * {@code --threads}. When an interval cannot be solved, standard output gets one line
- * {@code {"input", "lower", "upper", "error"}} per such interval instead of the report, the other
- * intervals are still solved, and the exit code is 2.
+ * {@code --threads} (accepted, with a warning). When an interval cannot be solved, standard output
+ * gets one line {@code {"input", "lower", "upper", "error"}} per such interval instead of the report,
+ * the other intervals are still solved, and the exit code is 2.
  */
 @Command(name = "intervals", mixinStandardHelpOptions = true,
         description = {
@@ -65,6 +65,10 @@ final class SparkIntervalsCommand implements Callable<Integer> {
     @Mixin
     private MasterOption master;
 
+    // accepted so that the options of 'morse' work here too; the master sets how much runs at once
+    @Mixin
+    private ThreadsOption threads;
+
     @Option(names = "--first-failure", description = "Report up to the first interval that fails the Cohen-Macaulay"
             + " condition (intervals are ordered shortest first), as 'morse intervals' does.")
     private boolean firstFailure;
@@ -88,6 +92,7 @@ final class SparkIntervalsCommand implements Callable<Integer> {
         Request request = Request.defaults().withHomology(coefficients, true)
                 .withMatching(matching.name(), runs.seed(), runs.trials()).withVerify(runs.verify());
         SweepOptions options = new SweepOptions(request, 1, firstFailure);
+        MasterOption.warnAboutThreads(spec);
         var read = InputReaders.read(file);
         PosetWithBounds hat = PosetWithBounds.of(SweepInputs.posetOf(read));
         SparkSweep.Outcome outcome;

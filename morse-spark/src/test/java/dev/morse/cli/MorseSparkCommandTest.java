@@ -47,9 +47,11 @@ class MorseSparkCommandTest {
         Run here = run(MorseCommand.newCommandLine(), "intervals", file, "--json", "--coefficients", "Z", "--mobius",
                 "--jsonl", linesHere.toString());
         Run there = run(MorseSparkCommand.newCommandLine(), "intervals", file, "--json", "--coefficients", "Z", "--mobius",
-                "--jsonl", linesThere.toString(), "--master", "local[2]");
+                "--jsonl", linesThere.toString(), "--master", "local[2]", "--threads", "2");
         assertEquals(0, here.code(), here.err());
         assertEquals(0, there.code(), there.err());
+        assertEquals("morse: warning: --threads does not apply on Spark: the master sets how many tasks run at once"
+                + " (--master local[N] on this machine)\n", there.err().replace(System.lineSeparator(), "\n"));
         // the intervals object has no timings, so it is the same text
         assertEquals(here.out(), there.out());
         assertTrue(there.out().contains("\"cohen_macaulay\": false"), there.out());
@@ -93,9 +95,9 @@ class MorseSparkCommandTest {
 
     @Test
     void anUnknownOptionIsOneLineAndExitCodeTwo() {
-        Run there = run(MorseSparkCommand.newCommandLine(), "intervals", "x.poset", "--threads", "2");
+        Run there = run(MorseSparkCommand.newCommandLine(), "intervals", "x.poset", "--executors", "2");
         assertEquals(2, there.code());
         assertEquals("", there.out());
-        assertEquals("morse: Unknown options: '--threads', '2' (see 'morse-spark intervals --help')\n", there.err());
+        assertEquals("morse: Unknown options: '--executors', '2' (see 'morse-spark intervals --help')\n", there.err());
     }
 }

@@ -5,11 +5,13 @@ import dev.morse.homology.Coefficients;
 import dev.morse.implicit.ElementOrder;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
+import java.io.Serializable;
 import java.time.Duration;
 import java.util.Objects;
 
 /**
- * What a computation should do with an input, whatever the command that asks.
+ * What a computation should do with an input, whatever the command that asks. A plain serialisable
+ * value, so that work sent to other machines is computed as asked.
  *
  * @param complex which complex to build from a poset; other inputs take only {@code AUTO}
  * @param coefficients the coefficient ring
@@ -29,7 +31,9 @@ import java.util.Objects;
  */
 public record Request(ComplexChoice complex, Coefficients coefficients, boolean reduced, String matching, long seed,
         int trials, boolean verify, boolean posetReduction, ElementOrder elementOrder, long storedChainLimit,
-        long maxStoredCells, Duration matchingTimeLimit) {
+        long maxStoredCells, Duration matchingTimeLimit) implements Serializable {
+    private static final long serialVersionUID = 1L;
+
     /** The matching name that means no Morse reduction: every cell is critical. */
     public static final String NO_MATCHING = "none";
 

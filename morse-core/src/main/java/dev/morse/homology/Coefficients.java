@@ -1,11 +1,14 @@
 package dev.morse.homology;
 
+import java.io.Serializable;
 import java.math.BigInteger;
 
 /**
  * The coefficient ring of homology: the integers, the rationals, or the field Z/p for a prime p.
  */
-public record Coefficients(Ring ring, int prime) {
+public record Coefficients(Ring ring, int prime) implements Serializable {
+    private static final long serialVersionUID = 1L;
+
     /** The three kinds of ring offered. */
     public enum Ring { INTEGERS, RATIONALS, PRIME_FIELD }
 

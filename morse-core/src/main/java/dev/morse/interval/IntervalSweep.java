@@ -46,8 +46,48 @@ public final class IntervalSweep {
         IntervalResult[] results = new IntervalResult[order.length];
         MobiusTable[] mobiusHolder = new MobiusTable[1];
         int swept = solveAll(hat, source, options, order, results, () -> mobiusHolder[0] = MobiusTable.of(hat));
-        MobiusTable mobius = mobiusHolder[0];
-        List<IntervalResult> kept = Arrays.asList(results).subList(0, swept);
+        return report(hat, source, options, order, Arrays.asList(results).subList(0, swept), mobiusHolder[0]);
+    }
+
+    /**
+     * Every interval of {@code hat} in the order a sweep visits them: shorter intervals first, then by
+     * the ids of their ends. Work solved elsewhere (on other machines, in any order) is put back in this
+     * order for {@link #assemble}.
+     */
+    public static List<IntervalTask> order(PosetWithBounds hat) {
+        return allTasks(sweepOrder(hat));
+    }
+
+    /**
+     * The report of a sweep whose intervals were solved elsewhere, exactly as {@link #run} would give
+     * it: with {@code firstFailure} the results after the first interval that fails the
+     * Cohen–Macaulay condition are dropped, and every kept result is checked against Philip Hall's theorem.
+     *
+     * @param solved the result of every interval of {@link #order}, in that order
+     * @throws IllegalArgumentException unless {@code solved} matches {@link #order} interval by interval
+     * @throws IllegalStateException if an interval's homology contradicts Philip Hall's theorem (a defect)
+     */
+    public static SweepReport assemble(PosetWithBounds hat, String source, SweepOptions options,
+            List<IntervalResult> solved) {
+        long[] order = sweepOrder(hat);
+        if (solved.size() != order.length) {
+            throw new IllegalArgumentException(solved.size() + " results for " + order.length + " intervals");
+        }
+        int swept = order.length;
+        for (int i = 0; i < order.length; i++) {
+            IntervalResult r = solved.get(i);
+            if (!r.task().equals(task(order[i]))) {
+                throw new IllegalArgumentException("result " + i + " is for " + r.task() + ", not " + task(order[i]));
+            }
+            if (options.firstFailure() && !r.cohenMacaulay() && swept == order.length) {
+                swept = i + 1;
+            }
+        }
+        return report(hat, source, options, order, solved.subList(0, swept), MobiusTable.of(hat));
+    }
+
+    private static SweepReport report(PosetWithBounds hat, String source, SweepOptions options, long[] order,
+            List<IntervalResult> kept, MobiusTable mobius) {
         for (IntervalResult r : kept) {
             BigInteger mu = mobius.value(r.task().lower(), r.task().upper());
             if (!mu.equals(BigInteger.valueOf(r.homology().reducedEulerCharacteristic()))) {

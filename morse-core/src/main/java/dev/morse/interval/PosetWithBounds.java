@@ -175,6 +175,26 @@ public final class PosetWithBounds {
         return down.isBelow(x, y);
     }
 
+    /**
+     * The ids of P̂ strictly above {@code x}, ascending: the upper ends of the intervals whose lower end is
+     * {@code x}. For 0̂ every element of P and 1̂; for an element of P its up-set and 1̂; none for 1̂.
+     */
+    public int[] uppers(int x) {
+        if (x == top()) {
+            return new int[0];
+        }
+        if (x == bottom()) {
+            int[] all = new int[size() + 1];
+            for (int z = 0; z <= size(); z++) {
+                all[z] = z == size() ? top() : z;
+            }
+            return all;
+        }
+        int[] above = Arrays.copyOfRange(up, upOffsets[x], upOffsets[x + 1] + 1);
+        above[above.length - 1] = top();
+        return above;
+    }
+
     /** Position of an element of P in the linear extension of P. */
     int position(int x) {
         return positions[x];

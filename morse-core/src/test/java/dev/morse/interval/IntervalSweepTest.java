@@ -212,6 +212,35 @@ class IntervalSweepTest {
     }
 
     @Test
+    void resultsSolvedOutOfOrderAssembleToTheSameReport() {
+        // the two triangles fail the Cohen–Macaulay condition (see above), so the cut at the first failure counts
+        Poset p = twoTrianglesSharingAVertex();
+        PosetWithBounds hat = PosetWithBounds.of(p);
+        IntervalSolver solver = new IntervalSolver(hat, Request.defaults(), "t");
+        java.util.Map<IntervalTask, IntervalResult> byTask = new java.util.HashMap<>();
+        // by lower end, as work split among machines comes back
+        for (int x = hat.size() + 1; x >= 0; x--) {
+            for (int y : hat.uppers(x)) {
+                IntervalTask t = new IntervalTask(x, y);
+                byTask.put(t, solver.solve(t));
+            }
+        }
+        java.util.List<IntervalTask> order = IntervalSweep.order(hat);
+        assertEquals(hat.intervalCount(), byTask.size());
+        assertEquals(hat.intervalCount(), order.size());
+        java.util.List<IntervalResult> solved = order.stream().map(byTask::get).toList();
+        for (boolean firstFailure : new boolean[] {false, true}) {
+            SweepOptions options = new SweepOptions(Request.defaults(), 1, firstFailure);
+            SweepReport here = IntervalSweep.run(hat, "t", options);
+            SweepReport assembled = IntervalSweep.assemble(hat, "t", options, solved);
+            assertEquals(here.results(), assembled.results());
+            assertEquals(here.witness(), assembled.witness());
+            assertEquals(here.spherical(), assembled.spherical());
+            assertEquals(here.cohenMacaulay(), assembled.cohenMacaulay());
+        }
+    }
+
+    @Test
     void unitsOfWorkSurviveJavaSerialisation() throws Exception {
         // the sweep's unit of work and its answer travel between machines as plain serialised values
         IntervalResult r = new IntervalResult(new IntervalTask(3, 7), 2, true, new IntervalHomology(0,

@@ -1,0 +1,69 @@
+package dev.morse.spark;
+
+import dev.morse.poset.Adjacency;
+import dev.morse.poset.Poset;
+import dev.morse.poset.PosetBuilder;
+import java.io.Serializable;
+import java.util.Arrays;
+
+/**
+ * A poset in the few arrays it takes to send it to other machines: its labels, by id, and its covers
+ * as two parallel arrays. {@link #rebuild()} gives back a poset with the same ids, so that the ids in
+ * the intervals sent with it mean the same elements there as here.
+ */
+public final class PosetShipment implements Serializable {
+    private static final long serialVersionUID = 1L;
+
+    private final String[] labels;
+    private final int[] coverLowers;
+    private final int[] coverUppers;
+
+    private PosetShipment(String[] labels, int[] coverLowers, int[] coverUppers) {
+        this.labels = labels;
+        this.coverLowers = coverLowers;
+        this.coverUppers = coverUppers;
+    }
+
+    /** The shipment of {@code poset}. */
+    public static PosetShipment of(Poset poset) {
+        int n = poset.size();
+        String[] labels = new String[n];
+        for (int x = 0; x < n; x++) {
+            labels[x] = poset.label(x);
+        }
+        Adjacency below = poset.lowerCovers();
+        int[] lowers = new int[below.edgeCount()];
+        int[] uppers = new int[below.edgeCount()];
+        int k = 0;
+        for (int z = 0; z < n; z++) {
+            for (int i = below.start(z); i < below.end(z); i++) {
+                lowers[k] = below.target(i);
+                uppers[k++] = z;
+            }
+        }
+        return new PosetShipment(labels, Arrays.copyOf(lowers, k), Arrays.copyOf(uppers, k));
+    }
+
+    /** The number of elements. */
+    public int size() {
+        return labels.length;
+    }
+
+    /**
+     * The poset again, each element with the id it had.
+     *
+     * @throws IllegalStateException if the labels are not distinct (a shipment not made by {@link #of})
+     */
+    public Poset rebuild() {
+        PosetBuilder builder = new PosetBuilder();
+        for (int x = 0; x < labels.length; x++) {
+            if (builder.element(labels[x]) != x) {
+                throw new IllegalStateException("label " + labels[x] + " appears twice");
+            }
+        }
+        for (int i = 0; i < coverLowers.length; i++) {
+            builder.relate(coverLowers[i], coverUppers[i], 0);
+        }
+        return builder.buildKnownAcyclic();
+    }
+}

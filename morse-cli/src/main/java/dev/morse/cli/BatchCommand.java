@@ -5,8 +5,6 @@ import dev.morse.batch.BatchOptions;
 import dev.morse.batch.BatchRun;
 import dev.morse.image.ImageOptions;
 import dev.morse.report.BatchJsonWriter;
-import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;
@@ -14,8 +12,6 @@ import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code morse batch FILE...}: the homology of many inputs, one JSON line each. */
@@ -31,33 +27,18 @@ final class BatchCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Parameters(arity = "1..*", paramLabel = "FILE", description = "Poset, simplicial or image files, or directories of them.")
-    private List<Path> files;
-
     @Mixin
-    private RequestOptions request;
+    private BatchCommandOptions batch;
 
     @Mixin
     private ThreadsOption threads;
 
-    @Option(names = "--cohen-macaulay", description = "Add \"cohen_macaulay\" to each line: the verdict of an interval"
-            + " sweep over the coefficients, for posets and simplicial complexes (null for images).")
-    private boolean cohenMacaulay;
-
-    @Mixin
-    private RunOptions run;
-
     @Override
     public Integer call() throws Exception {
-        BatchOptions options = new BatchOptions(request.request(spec),
-                new ImageOptions(OptionalInt.empty(), false, Optional.empty()), threads.threads(spec), cohenMacaulay);
-        List<BatchItem> items = BatchRun.items(files);
-        PrintWriter out = spec.commandLine().getOut();
-        int failed = run.around(spec, () -> BatchRun.run(items, options,
-                outcome -> BatchJsonWriter.toJsonLine(outcome, cohenMacaulay), line -> {
-                    out.print(line);
-                    out.flush();
-                }));
-        return failed > 0 ? Failures.BAD_INPUT : 0;
+        BatchOptions options = new BatchOptions(batch.request(spec),
+                new ImageOptions(OptionalInt.empty(), false, Optional.empty()), threads.threads(spec), batch.cohenMacaulay());
+        List<BatchItem> items = batch.items();
+        return batch.run(spec, emit -> BatchRun.run(items, options,
+                outcome -> BatchJsonWriter.toJsonLine(outcome, batch.cohenMacaulay()), emit));
     }
 }

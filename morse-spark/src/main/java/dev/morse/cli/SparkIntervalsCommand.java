@@ -2,29 +2,21 @@ package dev.morse.cli;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
-import dev.morse.engine.Request;
-import dev.morse.homology.Coefficients;
-import dev.morse.input.InputReaders;
+import dev.morse.input.Input;
 import dev.morse.interval.PosetWithBounds;
 import dev.morse.interval.SweepInputs;
 import dev.morse.interval.SweepOptions;
-import dev.morse.interval.SweepReport;
 import dev.morse.io.TextOutput;
-import dev.morse.report.IntervalJsonWriter;
-import dev.morse.report.IntervalTextWriter;
 import dev.morse.spark.IntervalOutcome;
 import dev.morse.spark.SparkContexts;
 import dev.morse.spark.SparkSweep;
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.apache.spark.api.java.JavaSparkContext;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -48,19 +40,8 @@ final class SparkIntervalsCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "FILE", description = "A morse-poset 1 or morse-simplicial 1 file.")
-    private Path file;
-
-    @Option(names = "--coefficients", paramLabel = "Z|Q|P", defaultValue = "Q",
-            converter = OptionConverters.CoefficientsConverter.class,
-            description = "Coefficients of the homology and the verdicts: Q (default), the integers Z, or Z/P for a prime P.")
-    private Coefficients coefficients;
-
     @Mixin
-    private MatchingChoice matching;
-
-    @Mixin
-    private MatchingRuns runs;
+    private SweepCommandOptions sweep;
 
     @Mixin
     private MasterOption master;
@@ -69,50 +50,24 @@ final class SparkIntervalsCommand implements Callable<Integer> {
     @Mixin
     private ThreadsOption threads;
 
-    @Option(names = "--first-failure", description = "Report up to the first interval that fails the Cohen-Macaulay"
-            + " condition (intervals are ordered shortest first), as 'morse intervals' does.")
-    private boolean firstFailure;
-
-    @Option(names = "--mobius", description = "Also list the Mobius function mu(x, y) of every interval.")
-    private boolean mobius;
-
-    @Option(names = "--jsonl", paramLabel = "FILE",
-            description = "Also write one JSON line per swept interval: lower, upper, dimension, homology.")
-    private Path jsonl;
-
-    @Mixin
-    private JsonOption output;
-
-    @Mixin
-    private RunOptions run;
-
     @Override
     public Integer call() throws Exception {
-        // the request of 'morse intervals', so that every interval is computed alike
-        Request request = Request.defaults().withHomology(coefficients, true)
-                .withMatching(matching.name(), runs.seed(), runs.trials()).withVerify(runs.verify());
-        SweepOptions options = new SweepOptions(request, 1, firstFailure);
+        // the sweep of 'morse intervals' on one thread per task, so that every interval is computed alike
+        SweepOptions options = sweep.options(1);
         MasterOption.warnAboutThreads(spec);
-        var read = InputReaders.read(file);
+        Input read = sweep.read();
         PosetWithBounds hat = PosetWithBounds.of(SweepInputs.posetOf(read));
         SparkSweep.Outcome outcome;
         try (JavaSparkContext spark = SparkContexts.start(master.master())) {
-            outcome = run.around(spec, () -> SparkSweep.run(spark, hat, read.source(), options));
+            outcome = sweep.around(spec, () -> SparkSweep.run(spark, hat, read.source(), options));
         }
-        PrintWriter out = spec.commandLine().getOut();
         if (outcome.report().isEmpty()) {
+            PrintWriter out = spec.commandLine().getOut();
             out.print(errorLines(read.source(), hat, outcome.failures()));
             out.flush();
             return Failures.BAD_INPUT;
         }
-        SweepReport report = outcome.report().get();
-        String text = output.json() ? IntervalJsonWriter.toJson(report, mobius) : IntervalTextWriter.toText(report, mobius);
-        if (jsonl != null) {
-            OutputFiles.write(jsonl, IntervalJsonWriter.toJsonLines(report));
-        }
-        out.print(text);
-        out.flush();
-        return 0;
+        return sweep.print(spec, outcome.report().get());
     }
 
     /** One compact line per failed interval: {@code {"input", "lower", "upper", "error"}}, labels or null. */

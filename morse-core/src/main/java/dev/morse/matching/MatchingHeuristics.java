@@ -57,12 +57,14 @@ public final class MatchingHeuristics {
     /**
      * Heuristics of this library found by {@link #byName} but left out of {@link #all()} and
      * {@link #names()}, so that whatever runs every heuristic by default does not run them: the exact
-     * solver {@code optimal}, which may take up to its time limit, and the collapse orders
-     * {@code last-free-face} and {@code freeing-collapse}, measured against the others on the hard
-     * library. A fresh list each call.
+     * solver {@code optimal}, which may take up to its time limit, the collapse orders
+     * {@code last-free-face} and {@code freeing-collapse}, and the same collapses followed by Forman's
+     * cancellations ({@code cancelling-collapse}, {@code cancelling-freeing-collapse}), measured
+     * against the others on the hard library. A fresh list each call.
      */
     public static List<MatchingHeuristic> onRequest() {
-        return List.of(new LastFreeFaceHeuristic(), new FreeingCollapseHeuristic(), new OptimalHeuristic());
+        return List.of(new LastFreeFaceHeuristic(), new FreeingCollapseHeuristic(), new CancellingCollapseHeuristic(),
+                new CancellingFreeingCollapseHeuristic(), new OptimalHeuristic());
     }
 
     /** {@link #all()} followed by {@link #onRequest()}, by name. A fresh unmodifiable map each call. */

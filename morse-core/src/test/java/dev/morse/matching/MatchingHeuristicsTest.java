@@ -16,6 +16,8 @@ class MatchingHeuristicsTest {
         assertInstanceOf(OptimalHeuristic.class, MatchingHeuristics.byName("optimal").orElseThrow());
         assertInstanceOf(LastFreeFaceHeuristic.class, MatchingHeuristics.byName("last-free-face").orElseThrow());
         assertInstanceOf(FreeingCollapseHeuristic.class, MatchingHeuristics.byName("freeing-collapse").orElseThrow());
+        assertInstanceOf(CancellingCollapseHeuristic.class,
+                MatchingHeuristics.byName("cancelling-collapse").orElseThrow());
         assertTrue(MatchingHeuristics.byName("steepest").isEmpty());
         assertTrue(!MatchingHeuristics.names().contains("optimal"));
     }
@@ -24,7 +26,8 @@ class MatchingHeuristicsTest {
     void everyKnownListsTheDefaultOnesThenThoseOnRequest() {
         List<String> names = List.copyOf(MatchingHeuristics.everyKnown().keySet());
         assertEquals(MatchingHeuristics.names(), names.subList(0, MatchingHeuristics.names().size()));
-        assertEquals(List.of("last-free-face", "freeing-collapse", "optimal"),
+        assertEquals(List.of("last-free-face", "freeing-collapse", "cancelling-collapse", "cancelling-freeing-collapse",
+                "optimal"),
                 names.subList(MatchingHeuristics.names().size(), names.size()));
     }
 }

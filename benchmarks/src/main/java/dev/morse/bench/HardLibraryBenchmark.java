@@ -45,7 +45,8 @@ import org.openjdk.jmh.annotations.Warmup;
 @Fork(value = 1, jvmArgsAppend = {"-Xmx2g"})
 public class HardLibraryBenchmark {
     /** The heuristic's name, as after {@code --matching}. */
-    @Param({"coreduction", "collapse", "lexicographic", "random", "last-free-face", "freeing-collapse", "optimal"})
+    @Param({"coreduction", "collapse", "lexicographic", "random", "last-free-face", "freeing-collapse",
+        "cancelling-collapse", "cancelling-freeing-collapse", "optimal"})
     public String heuristic;
 
     /** The exact solver's time limit per complex, in seconds (the default time limit is 20). */

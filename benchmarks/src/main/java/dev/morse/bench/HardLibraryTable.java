@@ -29,7 +29,7 @@ public final class HardLibraryTable {
     public static void main(String[] args) {
         Duration limit = Duration.ofSeconds(args.length > 0 ? Long.parseLong(args[0]) : 20);
         List<String> names = List.of("coreduction", "collapse", "lexicographic", "random", "last-free-face",
-                "freeing-collapse");
+                "freeing-collapse", "cancelling-collapse", "cancelling-freeing-collapse");
         System.out.println("| complex | cells | Morse bound | " + String.join(" | ", names)
                 + " | optimal | proven | bound found | solver ms |");
         System.out.println("|---|---|---|" + "---|".repeat(names.size()) + "---|---|---|---|");

@@ -100,6 +100,40 @@ class CompareCommandTest {
     }
 
     @Test
+    @SuppressWarnings("unchecked")
+    void theSpectrumOfTheTrialsAgreesWithTheirTallyAndTheOptimum() throws IOException {
+        // RP^2: H = Z, Z/2, 0 (Hatcher 2002, Ex. 2.42), so the Morse bound 3 = 1 + 1 + 1 is the optimum
+        String file = Inputs.write(dir, "rp2.simplicial", Inputs.RP2);
+        Map<String, Object> json = json("compare", file, "--matching", "random", "--trials", "40", "--json");
+        Map<String, Object> random = matchings(json).get(0);
+        Map<String, Object> optimum = (Map<String, Object>) json.get("optimum");
+        assertEquals(BigInteger.valueOf(3), optimum.get("total"));
+        List<Map<String, Object>> tally = (List<Map<String, Object>>) random.get("trials");
+        long atThree = 0;
+        long least = Long.MAX_VALUE;
+        long most = 0;
+        for (Map<String, Object> row : tally) {
+            long total = ((List<BigInteger>) row.get("critical")).stream().mapToLong(BigInteger::longValue).sum();
+            long count = ((BigInteger) row.get("count")).longValue();
+            atThree += total == 3 ? count : 0;
+            least = Math.min(least, total);
+            most = Math.max(most, total);
+        }
+        Map<String, Object> spectrum = (Map<String, Object>) random.get("trial_spectrum");
+        assertEquals(BigInteger.valueOf(40), spectrum.get("trials"));
+        assertEquals(BigInteger.valueOf(atThree), spectrum.get("at_optimum"));
+        assertEquals(BigInteger.valueOf(atThree), spectrum.get("at_morse_lower_bound"));
+        assertEquals(BigInteger.valueOf(least), spectrum.get("min_total"));
+        assertEquals(BigInteger.valueOf(most), spectrum.get("max_total"));
+        assertEquals(BigInteger.valueOf(most - 3), spectrum.get("max_gap"));
+        long median = ((BigInteger) spectrum.get("median_total")).longValue();
+        assertTrue(least <= median && median <= most, spectrum.toString());
+        CliRun text = CliRun.morse("compare", file, "--matching", "random", "--trials", "40");
+        assertTrue(text.out().contains(atThree + " of 40 trials reach the optimum 3; gap least " + (least - 3)
+                + ", median " + (median - 3) + ", most " + (most - 3)), text.out());
+    }
+
+    @Test
     void plotHasABarPerMatchingAndDimensionAndTheBoundsMarked() throws Exception {
         String file = Inputs.write(dir, "square.poset", Inputs.SQUARE);
         Path svg = dir.resolve("square.svg");

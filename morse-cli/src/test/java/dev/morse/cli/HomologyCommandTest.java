@@ -262,7 +262,7 @@ class HomologyCommandTest {
         assertEquals("", run.out());
         assertTrue(run.errLines().get(0).contains(
                 "unknown matching 'steepest'; available: coreduction, collapse, lexicographic, random, none, last-free-face,"
-                + " freeing-collapse, optimal"), run.err());
+                + " freeing-collapse, cancelling-collapse, cancelling-freeing-collapse, optimal"), run.err());
         assertTrue(run.errLines().size() <= 2, run.err());
     }
 

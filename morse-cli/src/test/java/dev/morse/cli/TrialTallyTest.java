@@ -17,7 +17,8 @@ import org.junit.jupiter.api.io.TempDir;
 /** The tally of repeated trials is a sorted table with a header, and a bar chart in the comparison plot. */
 class TrialTallyTest {
     /** One row of the table: vector, count, share, excess. */
-    private static final Pattern ROW = Pattern.compile(" +\\(([0-9, ]+)\\) +([0-9]+) +([0-9.]+)% +(-?[0-9]+)");
+    /** A row of the tally; compare adds a gap column when it sought the optimum. */
+    private static final Pattern ROW = Pattern.compile(" +\\(([0-9, ]+)\\) +([0-9]+) +([0-9.]+)% +(-?[0-9]+)( +(-?[0-9]+))?");
     /**
      * The matching complex of K_7: H = Z, Z/3, Z^20 (Bouc 1992; FamiliesHomologyTest), so the Morse
      * lower bound is 1 + (0 + 1) + (20 + 1) = 23 (Forman 1998).
@@ -34,7 +35,7 @@ class TrialTallyTest {
         assertEquals(0, CliRun.morse("generate", "matching", "7", "-o", m7).code());
     }
 
-    private record Row(List<Integer> vector, int count, double share, long excess) {
+    private record Row(List<Integer> vector, int count, double share, long excess, Long gap) {
     }
 
     private static List<Row> rows(String text) {
@@ -47,14 +48,14 @@ class TrialTallyTest {
                     vector.add(Integer.parseInt(c));
                 }
                 rows.add(new Row(vector, Integer.parseInt(m.group(2)), Double.parseDouble(m.group(3)),
-                        Long.parseLong(m.group(4))));
+                        Long.parseLong(m.group(4)), m.group(6) == null ? null : Long.parseLong(m.group(6))));
             }
         }
         return rows;
     }
 
     private static void assertTable(String text, int trials) {
-        assertTrue(text.matches("(?s).*\n +critical cells +count +share +excess\n.*"), text);
+        assertTrue(text.matches("(?s).*\n +critical cells +count +share +excess( +gap)?\n.*"), text);
         List<Row> rows = rows(text);
         assertTrue(!rows.isEmpty(), text);
         assertEquals(trials, rows.stream().mapToInt(Row::count).sum());
@@ -63,6 +64,10 @@ class TrialTallyTest {
             assertEquals(Math.round(1000.0 * r.count() / trials) / 10.0, r.share(), 1e-9, text);
             assertEquals(r.vector().stream().mapToLong(Integer::longValue).sum() - BOUND, r.excess(), text);
             assertTrue(r.excess() >= 0, "no matching beats the Morse lower bound");
+            if (r.gap() != null) {
+                // the optimum here meets the Morse bound (the exact search proves 23 = BOUND), so gap = excess
+                assertEquals(r.excess(), (long) r.gap(), text);
+            }
             if (i > 0) {
                 assertTrue(rows.get(i - 1).count() >= r.count(), "most frequent first: " + text);
             }
@@ -84,6 +89,7 @@ class TrialTallyTest {
                 "--plot", plot.toString());
         assertEquals(0, run.code(), run.err());
         assertTrue(run.out().contains("  random, 30 trials with seeds 1..30:\n"), run.out());
+        assertTrue(run.out().contains("  optimum   23 = 1 + 1 + 21 in dimensions 0..2, proven optimal"), run.out());
         assertTable(run.out(), 30);
         String svg = Files.readString(plot);
         Matcher bar = Pattern.compile("<rect class=\"trial\" data-matching=\"random\" data-vector=\"\\(([0-9, ]+)\\)\""

@@ -89,6 +89,17 @@ public record ComparisonReport(String input, InputFormat format, ComplexKind com
         return optimum.map(o -> run.totalCritical() - o.criticalTotal());
     }
 
+    /**
+     * For a randomized matching run several times, the spread of its trials' totals against the Morse
+     * bound and the exact optimum when it was sought; empty for a single run.
+     */
+    public Optional<TrialSpectrum> spectrum(MatchingRun run) {
+        if (run.trials().isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of(TrialSpectrum.of(run.trials(), morseLowerBound(), optimum.map(OptimalMatching::criticalTotal)));
+    }
+
     /** Total number of cells. */
     public long totalCells() {
         return cells.stream().mapToLong(Long::longValue).sum();

@@ -57,6 +57,17 @@ public final class HeuristicComparison {
      */
     public static ComparisonReport run(Input input, Request request, Optional<List<String>> matchings,
             boolean optimum) {
+        return run(input, request, matchings, optimum ? OptimalMatchingSolver.PROVEN_CELL_LIMIT : -1);
+    }
+
+    /**
+     * As {@link #run(Input, Request, Optional, boolean)}, seeking the exact optimum on stored complexes
+     * of at most {@code optimumCellLimit} cells (none when negative): beyond
+     * {@link OptimalMatchingSolver#PROVEN_CELL_LIMIT} the search may end at the time limit with only a
+     * bound, which the report then shows.
+     */
+    public static ComparisonReport run(Input input, Request request, Optional<List<String>> matchings,
+            long optimumCellLimit) {
         List<String> names = matchings.map(HeuristicComparison::requireComparable)
                 .orElseGet(HeuristicComparison::defaultMatchings);
         List<String> heuristics = names.stream().filter(n -> !n.startsWith(IMPLICIT_ROW)).toList();
@@ -105,8 +116,7 @@ public final class HeuristicComparison {
                 .filter(t -> t.phase().equals("read") || t.phase().equals("poset reduction") || t.phase().equals("complex"))
                 .toList();
         Optional<OptimalMatching> best = Optional.empty();
-        if (optimum && plan.stored().isPresent()
-                && plan.stored().get().cellCount() <= OptimalMatchingSolver.PROVEN_CELL_LIMIT) {
+        if (plan.stored().isPresent() && plan.stored().get().cellCount() <= optimumCellLimit) {
             best = Optional.of(OptimalMatchingSolver.solve(plan.stored().get(), request.matchingOptions()));
         }
         return new ComparisonReport(input.source(), input.format(), plan.kind(), reference.cells(), plan.cwCheck(),

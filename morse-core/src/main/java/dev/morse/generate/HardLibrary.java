@@ -41,6 +41,12 @@ public final class HardLibrary {
                 new HardComplex("chessboard-4x5", new Generated.OfFacets(ChessboardComplex.facets(4, 5),
                         "the chessboard complex of the 4x5 board"), null,
                         "chessboard complexes: Björner, Lovász, Vrećica and Živaljević 1994 (from memory)"),
+                new HardComplex("rudin-ball", new Generated.OfFacets(Triangulations.rudinBall(),
+                        "Rudin's non-shellable ball"), new int[] {1, 0, 0, 0},
+                        "Rudin 1958: a triangulated tetrahedron with 14 vertices, all on the boundary, and 41"
+                                + " tetrahedra that is not shellable; strongly so, no tetrahedron meets the boundary in a"
+                                + " disc (Lutz 2003). Collapsible (Benedetti and Lutz 2014, from memory); the exact"
+                                + " solver proves (1, 0, 0, 0), which by Forman 1998 shows the collapse"),
                 new HardComplex("simplex-4-ball", new Generated.OfPoset(SimplexFaces.closedFacePoset(4),
                         "the closed 4-simplex"), new int[] {1, 0, 0, 0, 0},
                         "a simplex is collapsible (Whitehead 1939), so (1, 0, ...) is optimal"),

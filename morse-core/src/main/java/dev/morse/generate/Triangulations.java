@@ -72,6 +72,32 @@ public final class Triangulations {
         });
     }
 
+    /**
+     * Rudin's non-shellable triangulation of a tetrahedron (M. E. Rudin, "An unshellable triangulation
+     * of a tetrahedron", Bull. Amer. Math. Soc. 64, 1958, 90–91): 14 vertices, all on the boundary,
+     * and 41 tetrahedra, each written as four letters {@code a..n}. The facet list and its vertex
+     * names are those of M. Hachimori's library of simplicial complexes (example "rudin"), as
+     * reproduced in published documentation; the counts (14 vertices, 41 tetrahedra, all vertices on
+     * the boundary) are Rudin's, and that no tetrahedron can be removed leaving a ball ("strongly
+     * non-shellable") is stated by Lutz ("A vertex-minimal non-shellable simplicial 3-ball", Electronic
+     * Geometry Models 2003.05.004). HardLibraryTest checks what can be checked: pure of dimension 3,
+     * f-vector (14, 66, 94, 41), every triangle in one or two tetrahedra, the homology of a point, a
+     * boundary with the homology of a 2-sphere containing every vertex, and no tetrahedron whose removal
+     * leaves a homology ball.
+     */
+    public static Facets rudinBall() {
+        List<List<String>> out = new ArrayList<>();
+        for (String tetrahedron : new String[] {
+            "klmn", "hlmn", "ikmn", "fjmn", "djmn", "fimn", "dhmn", "jkln", "bjln", "bhln", "cjkn", "eikn",
+            "egkn", "cgkn", "cfjn", "bdjn", "efin", "bdhn", "gklm", "eilm", "cilm", "ehlm", "cglm", "aikm",
+            "agkm", "efim", "acim", "dehm", "acgm", "fjkl", "fhkl", "dhkl", "dgkl", "bfjl", "bfhl", "dehl",
+            "cdgl", "cfjk", "aeik", "aegk", "cdgk"
+        }) {
+            out.add(tetrahedron.chars().mapToObj(c -> String.valueOf((char) c)).toList());
+        }
+        return Facets.ofLabels(out);
+    }
+
     private static List<String> modular(int n, int... vertices) {
         List<String> face = new ArrayList<>();
         for (int x : vertices) {

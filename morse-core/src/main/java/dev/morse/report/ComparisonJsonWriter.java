@@ -4,6 +4,7 @@ import dev.morse.engine.ComparisonReport;
 import dev.morse.engine.MatchingRun;
 import dev.morse.matching.OptimalMatching;
 import dev.morse.engine.PhaseTiming;
+import dev.morse.engine.TrialSpectrum;
 
 import com.fasterxml.jackson.core.JsonGenerator;
 import java.io.IOException;
@@ -20,7 +21,11 @@ import java.util.Locale;
  * {@code matching}, {@code critical}, {@code total}, {@code excess}, {@code gap} (beyond the optimum, when
  * sought), {@code timings_ms},
  * {@code peak_heap_bytes} (approximate; -1 when unknown) and, for randomized heuristics run several
- * times, {@code trials} (each critical vector with its {@code count}).
+ * times, {@code trials} (each critical vector with its {@code count}) and {@code trial_spectrum}: the
+ * number of {@code trials}, {@code min_total}, {@code median_total} (the lower median) and
+ * {@code max_total} of their critical cells, how many were {@code at_morse_lower_bound}, and when the
+ * optimum was sought, {@code optimum_total}, how many trials were {@code at_optimum}, and
+ * {@code min_gap}, {@code median_gap}, {@code max_gap} beyond it.
  */
 public final class ComparisonJsonWriter {
     private ComparisonJsonWriter() {
@@ -66,6 +71,24 @@ public final class ComparisonJsonWriter {
         json.writeEndObject();
     }
 
+    private static void writeSpectrum(JsonGenerator json, TrialSpectrum s) throws IOException {
+        json.writeObjectFieldStart("trial_spectrum");
+        json.writeNumberField("trials", s.trials());
+        json.writeNumberField("min_total", s.minTotal());
+        json.writeNumberField("median_total", s.medianTotal());
+        json.writeNumberField("max_total", s.maxTotal());
+        json.writeNumberField("at_morse_lower_bound", s.atBound());
+        if (s.optimum().isPresent()) {
+            long o = s.optimum().get();
+            json.writeNumberField("optimum_total", o);
+            json.writeNumberField("at_optimum", s.atOptimum());
+            json.writeNumberField("min_gap", s.minTotal() - o);
+            json.writeNumberField("median_gap", s.medianTotal() - o);
+            json.writeNumberField("max_gap", s.maxTotal() - o);
+        }
+        json.writeEndObject();
+    }
+
     private static void writeRun(JsonGenerator json, ComparisonReport report, MatchingRun run) throws IOException {
         json.writeStartObject();
         json.writeStringField("matching", run.matching());
@@ -83,6 +106,9 @@ public final class ComparisonJsonWriter {
         json.writeNumberField("peak_heap_bytes", run.peakHeapBytes());
         if (!run.trials().isEmpty()) {
             JsonReportWriter.writeTrials(json, run.trials());
+        }
+        if (report.spectrum(run).isPresent()) {
+            writeSpectrum(json, report.spectrum(run).get());
         }
         json.writeEndObject();
     }

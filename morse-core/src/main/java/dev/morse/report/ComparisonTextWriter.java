@@ -2,12 +2,14 @@ package dev.morse.report;
 
 import dev.morse.engine.ComparisonReport;
 import dev.morse.engine.MatchingRun;
+import dev.morse.engine.TrialSpectrum;
 import dev.morse.matching.OptimalMatching;
 
 import dev.morse.homology.HomologyGroup;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.StringJoiner;
 
 /**
@@ -42,7 +44,9 @@ public final class ComparisonTextWriter {
             if (!run.trials().isEmpty()) {
                 text.append(String.format(Locale.ROOT, "\n  %s, %d trials with seeds %d..%d:\n", run.matching(),
                         run.trialCount(), report.seed(), report.seed() + run.trialCount() - 1));
-                text.append(TrialTable.toText(run.trials(), report.morseLowerBound(), "    "));
+                Optional<Long> optimum = report.optimum().map(OptimalMatching::criticalTotal);
+                text.append(TrialTable.toText(run.trials(), report.morseLowerBound(), optimum, "    "));
+                report.spectrum(run).ifPresent(spectrum -> text.append(spectrumText(spectrum, "    ")));
             }
         }
         text.append("\n  Times are milliseconds. Peak heap is approximate: the sum of the heap pools' peaks while\n"
@@ -101,6 +105,21 @@ public final class ComparisonTextWriter {
                         + o.elapsed().toMillis() + " ms"
                 : found + " found; no matching has fewer than " + o.lowerBound() + " critical cells (time limit "
                         + "reached after " + o.elapsed().toMillis() + " ms)";
+    }
+
+    /**
+     * The spread of the trials' totals in one or two lines: least, median and most, how many trials
+     * met the Morse bound, and when the exact search ran, how many reached its best matching and the
+     * spread of their gap to it.
+     */
+    static String spectrumText(TrialSpectrum s, String indent) {
+        StringBuilder text = new StringBuilder(String.format(Locale.ROOT,
+                "%stotal critical cells: least %d, median %d, most %d; %d of %d trials at the Morse bound %d\n",
+                indent, s.minTotal(), s.medianTotal(), s.maxTotal(), s.atBound(), s.trials(), s.bound()));
+        s.optimum().ifPresent(o -> text.append(String.format(Locale.ROOT,
+                "%s%d of %d trials reach the optimum %d; gap least %d, median %d, most %d\n", indent, s.atOptimum(),
+                s.trials(), o, s.minTotal() - o, s.medianTotal() - o, s.maxTotal() - o)));
+        return text.toString();
     }
 
     private static String pad(String s, int width, boolean right) {

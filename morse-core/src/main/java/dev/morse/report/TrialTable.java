@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.StringJoiner;
 
 /**
@@ -19,6 +20,7 @@ final class TrialTable {
     static final String COUNT = "count";
     static final String SHARE = "share";
     static final String EXCESS = "excess";
+    static final String GAP = "gap";
 
     private TrialTable() {
     }
@@ -58,24 +60,39 @@ final class TrialTable {
      * row per vector. Shares are percentages of all trials with one decimal.
      */
     static String toText(List<TrialCount> trials, long bound, String indent) {
+        return toText(trials, bound, Optional.empty(), indent);
+    }
+
+    /**
+     * As {@link #toText(List, long, String)}, with a last column {@code gap}, the critical cells beyond
+     * {@code optimum}, when the exact search ran.
+     */
+    static String toText(List<TrialCount> trials, long bound, Optional<Long> optimum, String indent) {
         long total = trials.stream().mapToLong(TrialCount::count).sum();
         List<String[]> rows = new ArrayList<>();
-        rows.add(new String[] {VECTOR, COUNT, SHARE, EXCESS});
+        rows.add(optimum.isPresent() ? new String[] {VECTOR, COUNT, SHARE, EXCESS, GAP}
+                : new String[] {VECTOR, COUNT, SHARE, EXCESS});
         for (TrialCount t : sorted(trials)) {
-            rows.add(new String[] {vector(t.critical()), Integer.toString(t.count()),
-                String.format(Locale.ROOT, "%.1f%%", 100.0 * t.count() / total), Long.toString(excess(t, bound))});
+            List<String> row = new ArrayList<>(List.of(vector(t.critical()), Integer.toString(t.count()),
+                    String.format(Locale.ROOT, "%.1f%%", 100.0 * t.count() / total), Long.toString(excess(t, bound))));
+            optimum.ifPresent(o -> row.add(Long.toString(excess(t, o))));
+            rows.add(row.toArray(new String[0]));
         }
-        int[] width = new int[4];
+        int columns = rows.get(0).length;
+        int[] width = new int[columns];
         for (String[] row : rows) {
-            for (int c = 0; c < 4; c++) {
+            for (int c = 0; c < columns; c++) {
                 width[c] = Math.max(width[c], row[c].length());
             }
         }
         StringBuilder text = new StringBuilder();
         for (String[] row : rows) {
             // the vector left-aligned, the numbers right-aligned under their headings
-            text.append(indent).append(String.format(Locale.ROOT, "%-" + width[0] + "s  %" + width[1] + "s  %"
-                    + width[2] + "s  %" + width[3] + "s", (Object[]) row).stripTrailing()).append('\n');
+            StringBuilder line = new StringBuilder(String.format(Locale.ROOT, "%-" + width[0] + "s", row[0]));
+            for (int c = 1; c < columns; c++) {
+                line.append(String.format(Locale.ROOT, "  %" + width[c] + "s", row[c]));
+            }
+            text.append(indent).append(line.toString().stripTrailing()).append('\n');
         }
         return text.toString();
     }

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
+import dev.morse.complex.Facets;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.homology.Coefficients;
 import dev.morse.homology.Homology;
@@ -98,6 +99,89 @@ class HardLibraryTest {
                 assertEquals(hard.complex().dimension() + 1, known.length, hard.name());
             });
         }
+    }
+
+    @Test
+    void rudinsBallIsAPureHomologyBallWithEveryVertexOnItsBoundarySphere() {
+        // Rudin 1958: 14 vertices, all on the boundary of the tetrahedron it triangulates, 41 tetrahedra
+        ChainComplex ball = named("rudin-ball").complex();
+        assertArrayEquals(new int[] {14, 66, 94, 41}, ball.cellCounts());
+        assertEquals(List.of(HomologyGroup.free(0, 1), HomologyGroup.free(1, 0), HomologyGroup.free(2, 0),
+                HomologyGroup.free(3, 0)), HomologyCalculator.compute(ball, Coefficients.INTEGERS).groups());
+        Boundary coboundary = ball.coboundary();
+        List<List<String>> boundaryTriangles = new java.util.ArrayList<>();
+        for (int t = ball.firstCell(2); t < ball.firstCell(3); t++) {
+            // a 3-manifold with boundary: every triangle in one tetrahedron (on the boundary) or two
+            assertTrue(coboundary.size(t) == 1 || coboundary.size(t) == 2, ball.cellName(t));
+            if (coboundary.size(t) == 1) {
+                boundaryTriangles.add(labels(ball, t));
+            }
+        }
+        for (int c = 0; c < ball.cellCount(); c++) {
+            // pure: every cell lies in a tetrahedron
+            assertTrue(ball.dimensionOf(c) == 3 || coboundary.size(c) > 0, ball.cellName(c));
+        }
+        ChainComplex sphere = SimplicialComplex.of(dev.morse.complex.Facets.ofLabels(boundaryTriangles));
+        assertEquals(14, sphere.cellCount(0), "every vertex on the boundary");
+        assertEquals(List.of(HomologyGroup.free(0, 1), HomologyGroup.free(1, 0), HomologyGroup.free(2, 1)),
+                HomologyCalculator.compute(sphere, Coefficients.INTEGERS).groups());
+    }
+
+    @Test
+    void noTetrahedronOfRudinsBallMeetsTheBoundaryInADisc() {
+        // strongly non-shellable (Rudin 1958; Lutz 2003): a tetrahedron can be removed leaving a ball only
+        // when it meets the boundary in a 2-ball, that is in the closure of its boundary triangles alone
+        ChainComplex ball = named("rudin-ball").complex();
+        Boundary coboundary = ball.coboundary();
+        java.util.Set<List<String>> onBoundary = new java.util.HashSet<>();
+        for (int t = ball.firstCell(2); t < ball.firstCell(3); t++) {
+            if (coboundary.size(t) == 1) {
+                for (List<String> face : faces(labels(ball, t))) {
+                    onBoundary.add(face);
+                }
+            }
+        }
+        for (int f = ball.firstCell(3); f < ball.cellCount(); f++) {
+            List<String> tetrahedron = labels(ball, f);
+            java.util.Set<List<String>> closure = new java.util.HashSet<>();
+            for (List<String> face : faces(tetrahedron)) {
+                if (face.size() == 3 && onBoundary.contains(face)) {
+                    closure.addAll(faces(face));
+                }
+            }
+            java.util.Set<List<String>> meets = new java.util.HashSet<>();
+            for (List<String> face : faces(tetrahedron)) {
+                if (face.size() < 4 && onBoundary.contains(face)) {
+                    meets.add(face);
+                }
+            }
+            assertTrue(closure.isEmpty() || !closure.equals(meets), ball.cellName(f) + " meets the boundary in a disc");
+        }
+    }
+
+    private static List<String> labels(ChainComplex complex, int cell) {
+        List<String> labels = new java.util.ArrayList<>();
+        Facets facets = Triangulations.rudinBall();
+        for (int v : complex.vertexTuple(cell)) {
+            labels.add(facets.vertexLabel(v));
+        }
+        java.util.Collections.sort(labels);
+        return labels;
+    }
+
+    /** Every nonempty subset of a sorted face, each sorted. */
+    private static List<List<String>> faces(List<String> face) {
+        List<List<String>> out = new java.util.ArrayList<>();
+        for (int mask = 1; mask < 1 << face.size(); mask++) {
+            List<String> sub = new java.util.ArrayList<>();
+            for (int i = 0; i < face.size(); i++) {
+                if ((mask & 1 << i) != 0) {
+                    sub.add(face.get(i));
+                }
+            }
+            out.add(sub);
+        }
+        return out;
     }
 
     private static HardComplex named(String name) {

@@ -16,6 +16,7 @@ class MatchingHeuristicsTest {
         assertSame(MatchingHeuristics.OPTIMAL, MatchingHeuristics.byName("optimal").orElseThrow());
         assertSame(MatchingHeuristics.LAST_FREE_FACE, MatchingHeuristics.byName("last-free-face").orElseThrow());
         assertSame(MatchingHeuristics.FREEING_COLLAPSE, MatchingHeuristics.byName("freeing-collapse").orElseThrow());
+        assertSame(MatchingHeuristics.CANCELLING_COLLAPSE, MatchingHeuristics.byName("cancelling-collapse").orElseThrow());
         assertTrue(MatchingHeuristics.byName("steepest").isEmpty());
         assertTrue(!MatchingHeuristics.names().contains("optimal"));
     }
@@ -24,7 +25,8 @@ class MatchingHeuristicsTest {
     void everyKnownListsTheDefaultOnesThenThoseOnRequest() {
         List<String> names = List.copyOf(MatchingHeuristics.everyKnown().keySet());
         assertEquals(MatchingHeuristics.names(), names.subList(0, MatchingHeuristics.names().size()));
-        assertEquals(List.of("last-free-face", "freeing-collapse", "optimal"),
+        assertEquals(List.of("last-free-face", "freeing-collapse", "cancelling-collapse", "cancelling-freeing-collapse",
+                "optimal"),
                 names.subList(MatchingHeuristics.names().size(), names.size()));
     }
 }

@@ -37,6 +37,8 @@ class OptimalMatchingPropertyTest {
         List<MatchingHeuristic> heuristics = new ArrayList<>(MatchingHeuristics.all().values());
         heuristics.add(MatchingHeuristics.LAST_FREE_FACE);
         heuristics.add(MatchingHeuristics.FREEING_COLLAPSE);
+        heuristics.add(MatchingHeuristics.CANCELLING_COLLAPSE);
+        heuristics.add(MatchingHeuristics.CANCELLING_FREEING_COLLAPSE);
         int exhaustive = 0;
         int programs = 0;
         for (int i = 0; i < 240; i++) {
@@ -77,7 +79,8 @@ class OptimalMatchingPropertyTest {
         for (int i = 0; i < 300; i++) {
             ChainComplex complex = randomComplex(random, i);
             Homology oracle = HomologyCalculator.compute(complex, Coefficients.INTEGERS);
-            for (MatchingHeuristic h : List.of(MatchingHeuristics.LAST_FREE_FACE, MatchingHeuristics.FREEING_COLLAPSE)) {
+            for (MatchingHeuristic h : List.of(MatchingHeuristics.LAST_FREE_FACE, MatchingHeuristics.FREEING_COLLAPSE,
+                    MatchingHeuristics.CANCELLING_COLLAPSE, MatchingHeuristics.CANCELLING_FREEING_COLLAPSE)) {
                 MorseReduction.Outcome outcome = MorseReduction.run(complex,
                         new MorseReduction.Request(h, MatchingOptions.DEFAULT, Coefficients.INTEGERS, true));
                 assertEquals(oracle, outcome.homology(), "case " + i + " with " + h.name());

@@ -4,6 +4,7 @@ import dev.morse.batch.BatchItem;
 import dev.morse.batch.BatchOptions;
 import dev.morse.batch.BatchRun;
 import dev.morse.image.ImageOptions;
+import dev.morse.input.ReadOptions;
 import dev.morse.report.BatchJsonWriter;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -31,7 +32,8 @@ final class BatchCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Parameters(arity = "1..*", paramLabel = "FILE", description = "Poset, simplicial or image files, or directories of them.")
+    @Parameters(arity = "1..*", paramLabel = "FILE", description = "Poset, simplicial, image, graph or mesh files, or directories of them; a directory of"
+                    + " boundary-D.mtx matrices is one chain complex.")
     private List<Path> files;
 
     @Mixin
@@ -46,6 +48,11 @@ final class BatchCommand implements Callable<Integer> {
     @Mixin
     private ThreadsOption threads;
 
+    @Option(names = "--graph-as", paramLabel = "COMPLEX", converter = OptionConverters.GraphComplexConverter.class,
+            description = "What graph files stand for: clique (the default), independence, matching or"
+                    + " connected-subgraphs.")
+    private dev.morse.graph.GraphComplex graphAs;
+
     @Option(names = "--cohen-macaulay", description = "Add \"cohen_macaulay\" to each line: the verdict of an interval"
             + " sweep over the coefficients, for posets and simplicial complexes (null for images).")
     private boolean cohenMacaulay;
@@ -56,7 +63,8 @@ final class BatchCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         BatchOptions options = new BatchOptions(engine.request(spec, runs, matching.name()),
-                new ImageOptions(OptionalInt.empty(), false, Optional.empty()), threads.threads(spec), cohenMacaulay);
+                new ReadOptions(new ImageOptions(OptionalInt.empty(), false, Optional.empty()),
+                        graphAs == null ? ReadOptions.DEFAULT_GRAPH_COMPLEX : graphAs), threads.threads(spec), cohenMacaulay);
         List<BatchItem> items = BatchRun.items(files);
         PrintWriter out = spec.commandLine().getOut();
         int failed = run.around(spec, () -> BatchRun.run(items, options,

@@ -33,7 +33,7 @@ public final class SweepInputs {
             return facePoset(SimplicialComplex.of(facets.facets()));
         }
         throw new InputException(input.source(), InputException.NO_LINE,
-                "an interval sweep needs a poset or a simplicial file, not an image");
+                "an interval sweep needs a poset or a simplicial complex, not an image or a chain complex given by matrices");
     }
 
     /** The nonempty faces of {@code complex} ordered by inclusion, each covering its facets. */

@@ -80,6 +80,20 @@ class NewInputsCommandTest {
     }
 
     @Test
+    void inspectingMatricesGivesTheEulerCharacteristic() throws IOException {
+        Path matrices = exportedRp2();
+        CliRun run = CliRun.morse("inspect", matrices.toString(), "--json");
+        assertEquals(0, run.code(), run.err());
+        @SuppressWarnings("unchecked")
+        Map<String, Object> json = (Map<String, Object>) JsonValues.parse(run.out());
+        assertEquals("matrices", json.get("format"));
+        // chi(RP^2) = 1 - 0 + 0 = 1 from its homology (Hatcher 2002, Section 2.2); the Morse complex keeps it
+        assertEquals(java.math.BigInteger.ONE, json.get("euler_characteristic"));
+        // H_1 = Z/2 needs an entry other than 1 or -1
+        assertEquals(false, json.get("unit_entries"));
+    }
+
+    @Test
     void independenceComplexOfTheSixCycleIsTwoCircles() throws IOException {
         String c6 = Inputs.write(dir, "c6.edges", C6);
         // Kozlov 1999: Ind(C_{3k}) is a wedge of two spheres S^(k-1); k = 2

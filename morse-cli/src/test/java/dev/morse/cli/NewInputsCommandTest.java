@@ -142,6 +142,15 @@ class NewInputsCommandTest {
     }
 
     @Test
+    void generateRefusesALabelThatAFileCannotHold() throws IOException {
+        String dot = Inputs.write(dir, "cities.dot", "graph { \"New York\" -- Boston; Boston -- Albany }\n");
+        Path out = dir.resolve("cities.simplicial");
+        assertBadInput(dot + ": cannot be written as a morse file: label 'New York' contains ' '; labels there have"
+                + " no white space, ':' or '#'", "generate", "graph", dot, "-o", out.toString());
+        assertTrue(Files.notExists(out));
+    }
+
+    @Test
     void aNonSimplePolygonIsOneLine() throws IOException {
         String bad = Inputs.write(dir, "bad.obj", "v 0 0 0\nv 1 0 0\nv 0 1 0\nf 1 2 3 2\n");
         assertBadInput(bad + ":4: vertex 2 appears twice in this polygon; a polygon must be simple (its vertices"

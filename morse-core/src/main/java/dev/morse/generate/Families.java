@@ -116,6 +116,27 @@ public final class Families {
                 new dev.morse.input.ReadOptions(dev.morse.image.ImageOptions.defaults(), kind));
         String what = "the " + kind.optionName() + (kind == dev.morse.graph.GraphComplex.CONNECTED_SUBGRAPHS
                 ? " poset" : " complex") + " of the graph " + file.getFileName();
+        java.util.List<String> labels = new java.util.ArrayList<>();
+        if (input instanceof dev.morse.input.PosetInput poset) {
+            for (int x = 0; x < poset.poset().size(); x++) {
+                labels.add(poset.poset().label(x));
+            }
+        } else {
+            dev.morse.complex.Facets facets = ((dev.morse.input.FacetInput) input).facets();
+            for (int v = 0; v < facets.vertexCount(); v++) {
+                labels.add(facets.vertexLabel(v));
+            }
+        }
+        for (String label : labels) {
+            try {
+                dev.morse.poset.PosetBuilder.requireWritableLabel(label);
+            } catch (IllegalArgumentException e) {
+                // a label with white space would be read back as several vertices: refuse rather than corrupt
+                throw new dev.morse.io.InputException(file.toString(), dev.morse.io.InputException.NO_LINE,
+                        "cannot be written as a morse file: " + e.getMessage()
+                                + "; labels there have no white space, ':' or '#'");
+            }
+        }
         return input instanceof dev.morse.input.PosetInput poset ? new Generated.OfPoset(poset.poset(), what)
                 : new Generated.OfFacets(((dev.morse.input.FacetInput) input).facets(), what);
     }

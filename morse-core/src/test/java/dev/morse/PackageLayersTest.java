@@ -33,7 +33,7 @@ import org.junit.jupiter.api.Test;
 class PackageLayersTest {
     /** The packages under {@code dev.morse}, lowest first; a package may use only those before it. */
     static final List<String> LAYERS = List.of("progress", "parallel", "poset", "complex", "homology", "matching",
-            "morsecomplex", "cw", "posetreduction", "implicit", "io", "image", "input", "engine", "cycles", "interval",
+            "morsecomplex", "cw", "posetreduction", "implicit", "io", "image", "graph", "mesh", "input", "engine", "cycles", "interval",
             "batch", "inspect", "report", "generate");
 
     private static final Path SOURCES = Path.of("src", "main", "java");

@@ -3,11 +3,8 @@ package dev.morse.cli;
 import dev.morse.batch.BatchItem;
 import dev.morse.batch.BatchOptions;
 import dev.morse.batch.BatchRun;
-import dev.morse.image.ImageOptions;
 import dev.morse.report.BatchJsonWriter;
 import java.util.List;
-import java.util.Optional;
-import java.util.OptionalInt;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -35,8 +32,8 @@ final class BatchCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        BatchOptions options = new BatchOptions(batch.request(spec),
-                new ImageOptions(OptionalInt.empty(), false, Optional.empty()), threads.threads(spec), batch.cohenMacaulay());
+        BatchOptions options = new BatchOptions(batch.request(spec), batch.readOptions(), threads.threads(spec),
+                batch.cohenMacaulay());
         List<BatchItem> items = batch.items();
         return batch.run(spec, emit -> BatchRun.run(items, options,
                 outcome -> BatchJsonWriter.toJsonLine(outcome, batch.cohenMacaulay()), emit));

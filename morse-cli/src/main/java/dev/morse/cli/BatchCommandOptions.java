@@ -3,10 +3,15 @@ package dev.morse.cli;
 import dev.morse.batch.BatchItem;
 import dev.morse.batch.BatchRun;
 import dev.morse.engine.Request;
+import dev.morse.graph.GraphComplex;
+import dev.morse.image.ImageOptions;
+import dev.morse.input.ReadOptions;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
+import java.util.OptionalInt;
 import java.util.function.Consumer;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -19,11 +24,17 @@ import picocli.CommandLine.Parameters;
  * batch on a cluster take these same options and print the same lines.
  */
 final class BatchCommandOptions {
-    @Parameters(arity = "1..*", paramLabel = "FILE", description = "Poset, simplicial or image files, or directories of them.")
+    @Parameters(arity = "1..*", paramLabel = "FILE", description = "Poset, simplicial, image, graph or mesh files, or"
+            + " directories of them; a directory of boundary-D.mtx matrices is one chain complex.")
     private List<Path> files;
 
     @Mixin
     private RequestOptions request;
+
+    @Option(names = "--graph-as", paramLabel = "COMPLEX", converter = OptionConverters.GraphComplexConverter.class,
+            description = "What graph files stand for: clique (the default), independence, matching or"
+                    + " connected-subgraphs.")
+    private GraphComplex graphAs;
 
     @Option(names = "--cohen-macaulay", description = "Add \"cohen_macaulay\" to each line: the verdict of an interval"
             + " sweep over the coefficients, for posets and simplicial complexes (null for images).")
@@ -40,6 +51,12 @@ final class BatchCommandOptions {
     /** The request every input is computed with. */
     Request request(CommandSpec spec) {
         return request.request(spec);
+    }
+
+    /** How every input is read: images as given, graphs as {@code --graph-as} says. */
+    ReadOptions readOptions() {
+        return new ReadOptions(new ImageOptions(OptionalInt.empty(), false, Optional.empty()),
+                graphAs == null ? ReadOptions.DEFAULT_GRAPH_COMPLEX : graphAs);
     }
 
     /** Whether each line gets the Cohen–Macaulay verdict. */

@@ -153,6 +153,27 @@ final class GenerateCommand implements Callable<Integer> {
         return output.write(() -> Families.matchingComplex(n));
     }
 
+    @Command(name = "graph", mixinStandardHelpOptions = true, description = "A complex of the graph in FILE (Graphviz"
+            + " DOT, GraphML, or an edge list .edges): its clique, independence or matching complex (simplicial), or"
+            + " the poset of its connected induced subgraphs.")
+    int graph(@Parameters(paramLabel = "FILE", description = "The graph file.") java.nio.file.Path file,
+            @Option(names = "--graph-as", paramLabel = "COMPLEX", defaultValue = "clique",
+                    converter = OptionConverters.GraphComplexConverter.class,
+                    description = "clique (default), independence, matching or connected-subgraphs.")
+            dev.morse.graph.GraphComplex kind,
+            @Mixin OutputFile output) throws IOException {
+        dev.morse.generate.Generated made = Families.graphComplex(file, kind);
+        return output.write(() -> made);
+    }
+
+    @Command(name = "mesh", mixinStandardHelpOptions = true, description = "The face poset of the polygon mesh in FILE"
+            + " (Wavefront .obj or OFF): vertices, edges and polygons of its regular CW complex.")
+    int mesh(@Parameters(paramLabel = "FILE", description = "The mesh file.") java.nio.file.Path file,
+            @Mixin OutputFile output) throws IOException {
+        dev.morse.generate.Generated made = Families.meshFacePoset(file);
+        return output.write(() -> made);
+    }
+
     @Command(name = "chessboard", mixinStandardHelpOptions = true, description = "The chessboard complex of non-attacking rooks on an M x N board"
             + " (simplicial).")
     int chessboard(@Parameters(index = "0", paramLabel = "M", description = "Rows.") int m,

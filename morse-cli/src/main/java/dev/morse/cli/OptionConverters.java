@@ -117,6 +117,16 @@ final class OptionConverters {
         }
     }
 
+    /** The complex of a graph: clique, independence, matching or connected-subgraphs. */
+    static final class GraphComplexConverter implements ITypeConverter<dev.morse.graph.GraphComplex> {
+        @Override
+        public dev.morse.graph.GraphComplex convert(String value) {
+            return dev.morse.graph.GraphComplex.byName(value.strip()).orElseThrow(() -> new TypeConversionException(
+                    "the complex of a graph must be clique, independence, matching or connected-subgraphs, not '"
+                            + value + "'"));
+        }
+    }
+
     /** Sizes like {@code 64,64,32}. */
     static final class VolumeSizeConverter extends Parsed<VolumeSize> {
         VolumeSizeConverter() {

@@ -41,6 +41,18 @@ class ReadmeExamplesTest {
         assertEquals(List.of(1L, 1L, 0L), CliFiles.betti(json("ring.pbm")));
     }
 
+    @Test
+    void theGraphAndMeshExamplesHaveTheirKnownHomology() {
+        // the clique complex of the octahedron graph is the octahedron's boundary, S^2 (common practice)
+        assertEquals(List.of(1L, 0L, 1L), CliFiles.betti(json("octahedron.dot")));
+        // Kozlov 1999: Ind(C_6) is S^1 v S^1
+        assertEquals(List.of(1L, 2L, 0L), CliFiles.betti(CliFiles.homologyJson(
+                ROOT.resolve("docs/examples/c6.edges").toString(), "--graph-as", "independence")));
+        // the cube's surface is S^2; a 3 x 3 torus has Z, Z^2, Z (Hatcher 2002, Section 2.2)
+        assertEquals(List.of(1L, 0L, 1L), CliFiles.betti(json("cube.off")));
+        assertEquals(List.of(1L, 2L, 1L), CliFiles.betti(json("torus.obj")));
+    }
+
     private static Map<String, Object> json(String name) {
         return CliFiles.homologyJson(ROOT.resolve("docs/examples").resolve(name).toString());
     }

@@ -3,6 +3,7 @@ package dev.morse.batch;
 import dev.morse.parallel.Workers;
 import dev.morse.engine.Computation;
 import dev.morse.engine.Engines;
+import dev.morse.input.ChainComplexInput;
 import dev.morse.input.Input;
 import dev.morse.input.InputReaders;
 import dev.morse.input.VoxelInput;
@@ -42,14 +43,15 @@ public final class BatchRun {
 
     /**
      * The inputs named by {@code paths}: each directory stands for the regular files directly in it,
-     * by name, hidden ones left out; anything else stands for itself (a missing file fails in its turn).
+     * by name, hidden ones left out, unless it holds boundary matrices ({@code boundary-D.mtx}), when
+     * it is one chain complex; anything else stands for itself (a missing file fails in its turn).
      *
      * @throws InputException if a directory cannot be listed
      */
     public static List<BatchItem> items(List<Path> paths) {
         List<BatchItem> items = new ArrayList<>();
         for (Path path : paths) {
-            if (Files.isDirectory(path)) {
+            if (Files.isDirectory(path) && !holdsMatrices(path)) {
                 try (var listing = Files.list(path)) {
                     for (Path file : listing.filter(Files::isRegularFile)
                             .filter(f -> !f.getFileName().toString().startsWith(".")).sorted().toList()) {
@@ -65,15 +67,23 @@ public final class BatchRun {
         return items;
     }
 
+    private static boolean holdsMatrices(Path directory) {
+        try (var listing = Files.list(directory)) {
+            return listing.anyMatch(f -> f.getFileName().toString().matches("boundary-\\d{1,9}\\.mtx"));
+        } catch (IOException | UncheckedIOException e) {
+            throw new InputException(directory.toString(), InputException.NO_LINE, "cannot be listed: " + e.getMessage());
+        }
+    }
+
     /**
      * Computes one input; never throws for a problem of the input.
      */
     public static BatchOutcome compute(BatchItem item, BatchOptions options) {
         try (ProgressScope silent = Progress.use(Progress.SILENT)) {
-            Input input = InputReaders.read(List.of(Path.of(item.path())), options.image());
+            Input input = InputReaders.read(List.of(Path.of(item.path())), options.read());
             Computation run = Engines.compute(input, options.request());
             Optional<Boolean> cm = Optional.empty();
-            if (options.cohenMacaulay() && !(input instanceof VoxelInput)) {
+            if (options.cohenMacaulay() && !(input instanceof VoxelInput) && !(input instanceof ChainComplexInput)) {
                 PosetWithBounds hat = PosetWithBounds.of(SweepInputs.posetOf(input));
                 cm = Optional.of(IntervalSweep.run(hat, input.source(), new SweepOptions(options.request(), 1, true))
                         .cohenMacaulay());

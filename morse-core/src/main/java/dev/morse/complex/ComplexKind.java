@@ -9,7 +9,9 @@ public enum ComplexKind {
     /** All faces of listed faces. */
     SIMPLICIAL("simplicial"),
     /** The elementary cubes of a set of pixels or voxels. */
-    CUBICAL("cubical");
+    CUBICAL("cubical"),
+    /** A chain complex given outright by its boundary matrices: one cell per basis element. */
+    GIVEN("given");
 
     private final String reportName;
 

@@ -9,6 +9,7 @@ import dev.morse.cw.CellularAttempt;
 import dev.morse.cw.CwPosetCheck;
 import dev.morse.cw.CwPosetVerdict;
 import dev.morse.image.CubicalComplex;
+import dev.morse.input.ChainComplexInput;
 import dev.morse.input.FacetInput;
 import dev.morse.input.Input;
 import dev.morse.input.PosetInput;
@@ -26,7 +27,8 @@ import java.util.Optional;
 /**
  * The one policy that chooses the complex of an input, and the engine, for every command:
  * <ul>
- * <li>a simplicial file: its simplicial complex; an image: the cubical complex of its foreground;
+ * <li>a simplicial file: its simplicial complex; an image: the cubical complex of its foreground; a
+ *     chain complex given by its matrices: itself;
  * <li>a poset under {@code auto}: the cellular complex when it is a CW poset (checked once here);
  *     else the order complex of the poset shrunk by {@link PosetReduction} (unless switched off),
  *     stored when its chains, counted once here, are at most the request's limit (or when every cell
@@ -56,6 +58,15 @@ public final class ComplexPolicy {
                 return stored(ComplexKind.SIMPLICIAL, onlyAuto(input, request, "a simplicial file has only its own complex"),
                         () -> SimplicialComplex.of(facets.facets(), Math.min(request.maxStoredCells(),
                                 SimplicialComplex.DEFAULT_CELL_LIMIT)), start);
+            }
+            if (input instanceof ChainComplexInput given) {
+                ChainComplex complex = given.complex();
+                if (complex.cellCount() > request.maxStoredCells()) {
+                    throw new IllegalStateException(complex.cellCount() + " cells, more than the "
+                            + request.maxStoredCells() + " allowed here");
+                }
+                return stored(ComplexKind.GIVEN, onlyAuto(input, request, "a chain complex given by its matrices has"
+                        + " only itself"), () -> complex, start);
             }
             VoxelInput image = (VoxelInput) input;
             return stored(ComplexKind.CUBICAL, onlyAuto(input, request, "an image has only its cubical complex"),

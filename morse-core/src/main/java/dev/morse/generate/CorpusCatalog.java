@@ -49,6 +49,7 @@ final class CorpusCatalog {
         addProductsAndSums(e);
         addSmallPosets(e);
         addSimplicial(e);
+        addGraphsAndMeshes(e);
         return List.copyOf(e);
     }
 
@@ -230,6 +231,86 @@ final class CorpusCatalog {
                             + (k == n - 2 ? " (the boundary of the simplex)" : ""),
                     SKELETON, Expected.wedgeOfSpheres(rank, k, k), () -> Skeleton.ofSimplex(k, n)));
         }
+    }
+
+    private static final String KOZLOV = "Kozlov, Complexes of directed trees, J. Combin. Theory Ser. A 88 (1999):"
+            + " Ind(P_n) is S^(k-1) for n = 3k-1 and 3k and contractible for n = 3k+1; Ind(C_n) is"
+            + " S^(k-1) v S^(k-1) for n = 3k and S^(k-1) for n = 3k+-1";
+    private static final String MESH = "standard homology of the surface (Hatcher, Algebraic Topology, 2002, Ch. 2);"
+            + " CW poset: every polygon is simple, so its closure is a disc (common practice)";
+
+    /** Complexes made from graphs and meshes, as the graph and mesh inputs make them. */
+    private static void addGraphsAndMeshes(List<CorpusEntry> e) {
+        e.add(simplicial("independence-cycle-9", "independence complex of the cycle C_9: a wedge of two 2-spheres",
+                KOZLOV, Expected.parse("Z, 0, Z^2, 0"),
+                () -> dev.morse.graph.GraphComplexes.independenceComplex(cycleGraph(9))));
+        e.add(simplicial("independence-path-11", "independence complex of the path P_11: a 3-sphere up to homotopy",
+                KOZLOV, Expected.parse("Z, 0, 0, Z, 0, 0"),
+                () -> dev.morse.graph.GraphComplexes.independenceComplex(pathGraph(11))));
+        e.add(simplicial("clique-octahedron-graph", "clique complex of the octahedron graph K_{2,2,2}: the boundary"
+                + " of the octahedron, S^2", "common practice: the triangles of K_{2,2,2} are the eight faces of the"
+                + " octahedron, and it has no 4-cliques", Expected.parse("Z, 0, Z"),
+                () -> dev.morse.graph.GraphComplexes.cliqueComplex(octahedronGraph())));
+        e.add(poset("mesh-torus-3x4", "face poset of a 3x4 grid of squares on the torus (12 vertices, 24 edges,"
+                + " 12 squares)", MESH, true, Expected.parse("Z, Z^2, Z"),
+                () -> dev.morse.mesh.MeshReader.parseObj(torusMesh(3, 4), "mesh-torus-3x4").facePoset()));
+        e.add(poset("mesh-mobius-3", "face poset of a Moebius band of three squares glued with a half twist",
+                "standard: the Moebius band deformation retracts onto its core circle (Hatcher 2002, Ch. 0); CW"
+                        + " poset: every polygon is simple (common practice)", true, Expected.parse("Z, Z, 0"),
+                () -> dev.morse.mesh.MeshReader.parseObj("v 0 0 0\nv 1 0 0\nv 2 0 0\nv 0 1 0\nv 1 1 0\nv 2 1 0\n"
+                        + "f 1 2 5 4\nf 2 3 6 5\nf 3 4 1 6\n", "mesh-mobius-3").facePoset()));
+    }
+
+    private static dev.morse.graph.Graph pathGraph(int n) {
+        return graph(n, n - 1, i -> i, i -> i + 1);
+    }
+
+    private static dev.morse.graph.Graph cycleGraph(int n) {
+        return graph(n, n, i -> i, i -> (i + 1) % n);
+    }
+
+    /** Vertices 1..6 with 2k-1 and 2k opposite: every pair joined except the three opposite ones. */
+    private static dev.morse.graph.Graph octahedronGraph() {
+        List<int[]> edges = new ArrayList<>();
+        for (int i = 0; i < 6; i++) {
+            for (int j = i + 1; j < 6; j++) {
+                if (!(i % 2 == 0 && j == i + 1)) {
+                    edges.add(new int[] {i, j});
+                }
+            }
+        }
+        return graph(6, edges.size(), k -> edges.get(k)[0], k -> edges.get(k)[1]);
+    }
+
+    private static dev.morse.graph.Graph graph(int n, int m, java.util.function.IntUnaryOperator u,
+            java.util.function.IntUnaryOperator v) {
+        String[] labels = new String[n];
+        for (int i = 0; i < n; i++) {
+            labels[i] = Integer.toString(i + 1);
+        }
+        int[] us = new int[m];
+        int[] vs = new int[m];
+        for (int k = 0; k < m; k++) {
+            us[k] = u.applyAsInt(k);
+            vs[k] = v.applyAsInt(k);
+        }
+        return dev.morse.graph.Graph.of(labels, us, vs, m);
+    }
+
+    /** An m x n grid of squares with opposite sides glued, in OBJ. */
+    private static String torusMesh(int m, int n) {
+        StringBuilder obj = new StringBuilder();
+        for (int k = 0; k < m * n; k++) {
+            obj.append("v ").append(k / n).append(' ').append(k % n).append(" 0\n");
+        }
+        for (int i = 0; i < m; i++) {
+            for (int j = 0; j < n; j++) {
+                obj.append("f ").append(i * n + j + 1).append(' ').append(i * n + (j + 1) % n + 1).append(' ')
+                        .append((i + 1) % m * n + (j + 1) % n + 1).append(' ').append((i + 1) % m * n + j + 1)
+                        .append('\n');
+            }
+        }
+        return obj.toString();
     }
 
     private static int binomial(int n, int k) {

@@ -103,6 +103,72 @@ public final class Families {
         return new Generated.OfFacets(MatchingComplex.facets(n), "the matching complex of K_" + n);
     }
 
+    /**
+     * The complex {@code kind} of the graph in {@code file} (DOT, GraphML or an edge list), as a
+     * simplicial file or, for the connected induced subgraphs, a poset file.
+     *
+     * @throws dev.morse.io.InputException when the file is not a graph file or is malformed
+     */
+    public static Generated graphComplex(java.nio.file.Path file, dev.morse.graph.GraphComplex kind)
+            throws java.io.IOException {
+        dev.morse.io.InputFormat format = requireFile(file);
+        if (format != dev.morse.io.InputFormat.DOT && format != dev.morse.io.InputFormat.GRAPHML
+                && format != dev.morse.io.InputFormat.EDGES) {
+            throw new dev.morse.io.InputException(file.toString(), dev.morse.io.InputException.NO_LINE,
+                    "a graph file is needed here (.dot, .graphml or .edges), not a " + format.kind() + " file");
+        }
+        dev.morse.input.Input input = dev.morse.input.InputReaders.read(java.util.List.of(file),
+                new dev.morse.input.ReadOptions(dev.morse.image.ImageOptions.defaults(), kind));
+        String what = "the " + kind.optionName() + (kind == dev.morse.graph.GraphComplex.CONNECTED_SUBGRAPHS
+                ? " poset" : " complex") + " of the graph " + file.getFileName();
+        java.util.List<String> labels = new java.util.ArrayList<>();
+        if (input instanceof dev.morse.input.PosetInput poset) {
+            for (int x = 0; x < poset.poset().size(); x++) {
+                labels.add(poset.poset().label(x));
+            }
+        } else {
+            dev.morse.complex.Facets facets = ((dev.morse.input.FacetInput) input).facets();
+            for (int v = 0; v < facets.vertexCount(); v++) {
+                labels.add(facets.vertexLabel(v));
+            }
+        }
+        for (String label : labels) {
+            try {
+                dev.morse.poset.PosetBuilder.requireWritableLabel(label);
+            } catch (IllegalArgumentException e) {
+                // a label with white space would be read back as several vertices: refuse rather than corrupt
+                throw new dev.morse.io.InputException(file.toString(), dev.morse.io.InputException.NO_LINE,
+                        "cannot be written as a morse file: " + e.getMessage()
+                                + "; labels there have no white space, ':' or '#'");
+            }
+        }
+        return input instanceof dev.morse.input.PosetInput poset ? new Generated.OfPoset(poset.poset(), what)
+                : new Generated.OfFacets(((dev.morse.input.FacetInput) input).facets(), what);
+    }
+
+    /**
+     * The face poset of the polygon mesh in {@code file} (OBJ or OFF), a CW poset.
+     *
+     * @throws dev.morse.io.InputException when the file is not a mesh file or is malformed
+     */
+    public static Generated meshFacePoset(java.nio.file.Path file) throws java.io.IOException {
+        dev.morse.io.InputFormat format = requireFile(file);
+        if (format != dev.morse.io.InputFormat.OBJ && format != dev.morse.io.InputFormat.OFF) {
+            throw new dev.morse.io.InputException(file.toString(), dev.morse.io.InputException.NO_LINE,
+                    "a mesh file is needed here (.obj or OFF), not a " + format.kind() + " file");
+        }
+        dev.morse.input.PosetInput input = (dev.morse.input.PosetInput) dev.morse.input.InputReaders.read(file);
+        return new Generated.OfPoset(input.poset(), "the face poset of the polygon mesh " + file.getFileName());
+    }
+
+    private static dev.morse.io.InputFormat requireFile(java.nio.file.Path file) throws java.io.IOException {
+        if (!java.nio.file.Files.isRegularFile(file)) {
+            throw new dev.morse.io.InputException(file.toString(), dev.morse.io.InputException.NO_LINE,
+                    java.nio.file.Files.exists(file) ? "is not a regular file" : "no such file");
+        }
+        return dev.morse.io.InputFormat.sniff(file);
+    }
+
     /** The chessboard complex of the {@code m × n} board. */
     public static Generated chessboardComplex(int m, int n) {
         return new Generated.OfFacets(ChessboardComplex.facets(m, n), "the chessboard complex of the " + m + "x" + n

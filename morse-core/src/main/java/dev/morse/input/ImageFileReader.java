@@ -1,7 +1,6 @@
 package dev.morse.input;
 
 import dev.morse.image.ImageInput;
-import dev.morse.image.ImageOptions;
 import dev.morse.image.LoadedImage;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -14,13 +13,13 @@ import java.util.List;
 final class ImageFileReader implements InputReader {
     @Override
     public boolean recognises(InputProbe probe) {
-        return probe.options().rawSize().isPresent() || probe.directory() || probe.image();
+        return probe.options().rawSize().isPresent() || (probe.directory() && probe.header().isEmpty()) || probe.image();
     }
 
     @Override
-    public Input read(List<Path> files, ImageOptions options) throws IOException {
+    public Input read(List<Path> files, ReadOptions options) throws IOException {
         long start = System.nanoTime();
-        LoadedImage image = ImageInput.load(files, options);
+        LoadedImage image = ImageInput.load(files, options.image());
         StringBuilder source = new StringBuilder();
         for (Path file : files) {
             source.append(source.length() > 0 ? " " : "").append(file);

@@ -1,6 +1,5 @@
 package dev.morse.input;
 
-import dev.morse.image.ImageOptions;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
@@ -20,5 +19,5 @@ public interface InputReader {
      * @throws dev.morse.io.InputException naming the file, and the line where one is to blame
      * @throws IOException when reading fails for a reason that is not the file's content
      */
-    Input read(List<Path> files, ImageOptions options) throws IOException;
+    Input read(List<Path> files, ReadOptions options) throws IOException;
 }

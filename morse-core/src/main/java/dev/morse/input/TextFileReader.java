@@ -1,6 +1,5 @@
 package dev.morse.input;
 
-import dev.morse.image.ImageOptions;
 import dev.morse.io.InputFormat;
 import dev.morse.io.PosetReader;
 import dev.morse.io.SimplicialReader;
@@ -58,7 +57,7 @@ final class TextFileReader<T> implements InputReader {
     }
 
     @Override
-    public Input read(List<Path> files, ImageOptions options) throws IOException {
+    public Input read(List<Path> files, ReadOptions options) throws IOException {
         long start = System.nanoTime();
         Path file = files.get(0);
         T value = fileRead.read(file);

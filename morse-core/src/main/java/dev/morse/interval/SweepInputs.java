@@ -5,6 +5,7 @@ import dev.morse.complex.SimplicialComplex;
 import dev.morse.input.FacetInput;
 import dev.morse.input.Input;
 import dev.morse.input.PosetInput;
+import dev.morse.input.VoxelInput;
 import dev.morse.io.InputException;
 import dev.morse.poset.Poset;
 import dev.morse.poset.PosetBuilder;
@@ -32,8 +33,8 @@ public final class SweepInputs {
         if (input instanceof FacetInput facets) {
             return facePoset(SimplicialComplex.of(facets.facets()));
         }
-        throw new InputException(input.source(), InputException.NO_LINE,
-                "an interval sweep needs a poset or a simplicial file, not an image");
+        throw new InputException(input.source(), InputException.NO_LINE, "an interval sweep needs a poset or a"
+                + " simplicial file, not " + (input instanceof VoxelInput ? "an image" : "a chain complex given by matrices"));
     }
 
     /** The nonempty faces of {@code complex} ordered by inclusion, each covering its facets. */

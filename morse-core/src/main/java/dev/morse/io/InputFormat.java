@@ -19,7 +19,22 @@ public enum InputFormat {
     /** A 2D image (Netpbm, PNG and the other formats of javax.imageio), read as its foreground pixels. */
     IMAGE("image", ""),
     /** A 3D volume (a stack of 2D slices, or raw bytes), read as its foreground voxels. */
-    VOLUME("volume", "");
+    VOLUME("volume", ""),
+    /** Boundary matrices in the Matrix Market format, read by {@link MatrixMarketReader}: a chain complex. */
+    MATRICES("matrices", ""),
+    /** A graph in the Graphviz DOT language. */
+    DOT("dot", ""),
+    /** A graph in GraphML. */
+    GRAPHML("graphml", ""),
+    /** A graph as a plain edge list, one edge {@code u v} per line; told by the file name ending {@code .edges}. */
+    EDGES("edges", ""),
+    /** A polygon mesh in the Wavefront OBJ format; told by the file name ending {@code .obj}. */
+    OBJ("obj", ""),
+    /** A polygon mesh in the OFF format, told by its first line {@code OFF}. */
+    OFF("off", "");
+
+    /** How many characters the content sniffing of {@link #sniff(Path)} looks at. */
+    private static final int SNIFF_CHARS = 4096;
 
     private static final int QUOTED_HEADER_LENGTH = 40;
 
@@ -57,6 +72,81 @@ public enum InputFormat {
         try (BufferedReader reader = PosetReader.utf8(file)) {
             return detect(reader, file.toString());
         }
+    }
+
+    /**
+     * The format of a single file that is not an image: told by its first bytes for Matrix Market,
+     * OFF, GraphML and DOT, by its name for OBJ ({@code .obj}) and edge lists ({@code .edges}), which
+     * have no header, and otherwise by its header line as in {@link #detect(Path)}.
+     *
+     * @throws InputException as {@link #detect(Path)} does when no format is recognised
+     */
+    public static InputFormat sniff(Path file) throws IOException {
+        String name = file.getFileName() == null ? "" : file.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
+        if (name.endsWith(".obj")) {
+            return OBJ;
+        }
+        if (name.endsWith(".edges")) {
+            return EDGES;
+        }
+        char[] buffer = new char[SNIFF_CHARS];
+        int length = 0;
+        try (Reader reader = new java.io.InputStreamReader(java.nio.file.Files.newInputStream(file),
+                java.nio.charset.StandardCharsets.UTF_8)) {
+            int read;
+            while (length < buffer.length && (read = reader.read(buffer, length, buffer.length - length)) > 0) {
+                length += read;
+            }
+        }
+        InputFormat byContent = byContent(new String(buffer, 0, length));
+        return byContent != null ? byContent : detect(file);
+    }
+
+    /** The format told by the start of a text, or null when the start names none of the headerless formats. */
+    static InputFormat byContent(String start) {
+        String text = start.startsWith("\uFEFF") ? start.substring(1) : start;
+        String trimmed = text.stripLeading();
+        if (trimmed.regionMatches(true, 0, MatrixMarketReader.BANNER, 0, MatrixMarketReader.BANNER.length())) {
+            return MATRICES;
+        }
+        if (trimmed.startsWith("<")) {
+            return trimmed.contains("<graphml") ? GRAPHML : null;
+        }
+        String first = firstDotWord(text);
+        if (first.equals("OFF")) {
+            return OFF;
+        }
+        String lower = first.toLowerCase(java.util.Locale.ROOT);
+        return lower.equals("graph") || lower.equals("digraph") || lower.equals("strict") ? DOT : null;
+    }
+
+    /**
+     * The first word of a text once comments are skipped: {@code #} lines (comments in the house
+     * formats and OFF, preprocessor lines in DOT), {@code //} and {@code /* ... *}{@code /} comments (DOT).
+     */
+    private static String firstDotWord(String text) {
+        int i = 0;
+        int n = text.length();
+        while (i < n) {
+            char c = text.charAt(i);
+            if (Character.isWhitespace(c)) {
+                i++;
+            } else if (c == '#' || text.startsWith("//", i)) {
+                int end = text.indexOf('\n', i);
+                i = end < 0 ? n : end + 1;
+            } else if (text.startsWith("/*", i)) {
+                int end = text.indexOf("*/", i + 2);
+                i = end < 0 ? n : end + 2;
+            } else {
+                int start = i;
+                while (i < n && (Character.isLetterOrDigit(text.charAt(i)) || text.charAt(i) == '-'
+                        || text.charAt(i) == '_')) {
+                    i++;
+                }
+                return text.substring(start, i);
+            }
+        }
+        return "";
     }
 
     /** The format of text held in a string; {@code source} names it in error messages. */

@@ -105,6 +105,7 @@ public final class HasseDrawings {
                     + (run.plan().isImplicit() ? " (chains generated on demand)" : "");
             case SIMPLICIAL -> "face poset of the simplicial complex";
             case CUBICAL -> "face poset of the cubical complex, one node per elementary cube";
+            case GIVEN -> "cells of the chain complex given by its matrices, one node per basis element";
         };
     }
 

@@ -2,11 +2,13 @@ package dev.morse.report;
 
 import com.fasterxml.jackson.core.JsonGenerator;
 import dev.morse.inspect.PosetSummary;
+import dev.morse.inspect.ChainComplexSummary;
 import dev.morse.inspect.ImageInspector;
 import dev.morse.inspect.ImageSummary;
 import dev.morse.inspect.PosetInspector;
 import dev.morse.inspect.SimplicialInspector;
 import dev.morse.inspect.SimplicialSummary;
+import dev.morse.input.ChainComplexInput;
 import dev.morse.input.FacetInput;
 import dev.morse.input.Input;
 import dev.morse.input.PosetInput;
@@ -89,7 +91,24 @@ public final class InspectionJsonWriter {
         if (input instanceof FacetInput facets) {
             return toJson(input.source(), SimplicialInspector.inspect(facets.facets()));
         }
+        if (input instanceof ChainComplexInput given) {
+            return toJson(input.source(), ChainComplexSummary.of(given.complex()));
+        }
         return toJson(input.source(), ImageInspector.inspect(((VoxelInput) input).image()));
+    }
+
+    /** The summary of a chain complex given by its boundary matrices as indented JSON ending with a newline. */
+    public static String toJson(String input, ChainComplexSummary s) {
+        return JsonStyle.toText(json -> {
+            json.writeStartObject();
+            json.writeStringField("input", input);
+            json.writeStringField("format", "matrices");
+            JsonStyle.intArray(json, "cells", s.cells());
+            JsonStyle.intArray(json, "entries", s.entries());
+            json.writeBooleanField("unit_entries", s.unitEntries());
+            json.writeNumberField("euler_characteristic", s.eulerCharacteristic());
+            json.writeEndObject();
+        });
     }
 
     private static void verdict(JsonGenerator json, String field, String flag, boolean holds, String reason)

@@ -1,11 +1,13 @@
 package dev.morse.report;
 
 import dev.morse.inspect.PosetSummary;
+import dev.morse.inspect.ChainComplexSummary;
 import dev.morse.inspect.ImageInspector;
 import dev.morse.inspect.ImageSummary;
 import dev.morse.inspect.PosetInspector;
 import dev.morse.inspect.SimplicialInspector;
 import dev.morse.inspect.SimplicialSummary;
+import dev.morse.input.ChainComplexInput;
 import dev.morse.input.FacetInput;
 import dev.morse.input.Input;
 import dev.morse.input.PosetInput;
@@ -88,7 +90,22 @@ public final class InspectionTextWriter {
         if (input instanceof FacetInput facets) {
             return toText(input.source(), SimplicialInspector.inspect(facets.facets()));
         }
+        if (input instanceof ChainComplexInput given) {
+            return toText(input.source(), ChainComplexSummary.of(given.complex()));
+        }
         return toText(input.source(), ImageInspector.inspect(((VoxelInput) input).image()));
+    }
+
+    /** The summary of a chain complex given by its boundary matrices, as lines of text. */
+    public static String toText(String input, ChainComplexSummary s) {
+        StringBuilder text = new StringBuilder();
+        text.append(input).append(" (boundary matrices)\n");
+        row(text, "cells", s.cells().isEmpty() ? "none" : "(" + joined(s.cells(), ", ") + ") in dimensions 0.."
+                + (s.cells().size() - 1));
+        row(text, "entries", "nonzero entries of the boundary per dimension (" + joined(s.entries(), ", ") + ")"
+                + (s.unitEntries() ? ", all of them 1 or -1" : ""));
+        row(text, "euler", "Euler characteristic " + s.eulerCharacteristic());
+        return text.toString();
     }
 
     private static String levels(PosetSummary s) {

@@ -78,7 +78,7 @@ public final class TextReportWriter {
             case SIMPLICIAL -> new StringJoiner(" ", "{", "}");
             case ORDER -> new StringJoiner("<");
             case CUBICAL -> new StringJoiner("x");
-            case CELLULAR -> new StringJoiner("");
+            case CELLULAR, GIVEN -> new StringJoiner("");
         };
         for (Object part : label) {
             parts.add(part instanceof List<?> pair ? "[" + pair.get(0) + "," + pair.get(1) + "]" : part.toString());
@@ -185,6 +185,7 @@ public final class TextReportWriter {
                     : "order complex, one simplex per chain of the poset";
             case SIMPLICIAL -> "simplicial, all faces of the listed faces";
             case CUBICAL -> "cubical, one cell per elementary cube of the foreground";
+            case GIVEN -> "given by its boundary matrices, one cell per basis element";
         };
     }
 

@@ -41,7 +41,8 @@ final class SparkBatchCommand implements Callable<Integer> {
         MasterOption.warnAboutThreads(spec);
         List<BatchItem> items = batch.items();
         try (JavaSparkContext spark = SparkContexts.start(master.master())) {
-            return batch.run(spec, emit -> SparkBatch.run(spark, items, request, batch.cohenMacaulay(), emit));
+            return batch.run(spec, emit -> SparkBatch.run(spark, items, request, batch.readOptions().graphAs(),
+                    batch.cohenMacaulay(), emit));
         }
     }
 }

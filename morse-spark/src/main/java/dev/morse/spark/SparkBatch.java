@@ -5,7 +5,9 @@ import dev.morse.batch.BatchOptions;
 import dev.morse.batch.BatchOutcome;
 import dev.morse.batch.BatchRun;
 import dev.morse.engine.Request;
+import dev.morse.graph.GraphComplex;
 import dev.morse.image.ImageOptions;
+import dev.morse.input.ReadOptions;
 import dev.morse.report.BatchJsonWriter;
 import java.io.Serializable;
 import java.util.ArrayList;
@@ -35,17 +37,18 @@ public final class SparkBatch {
     /**
      * Runs the batch.
      *
+     * @param graphAs what graph files stand for, as {@code --graph-as} says
      * @param cohenMacaulay whether each line also gets the Cohen–Macaulay verdict
      * @param emit receives the lines in the order of the inputs, each ending with a newline
      * @return how many inputs failed
      */
-    public static int run(JavaSparkContext spark, List<BatchItem> items, Request request, boolean cohenMacaulay,
-            Consumer<String> emit) {
+    public static int run(JavaSparkContext spark, List<BatchItem> items, Request request, GraphComplex graphAs,
+            boolean cohenMacaulay, Consumer<String> emit) {
         if (items.isEmpty()) {
             return 0;
         }
         List<Line> lines = new ArrayList<>(spark.parallelize(items, items.size())
-                .map(item -> computeOne(item, request, cohenMacaulay))
+                .map(item -> computeOne(item, request, graphAs, cohenMacaulay))
                 .collect());
         lines.sort(Comparator.comparingInt(Line::index));
         int failed = 0;
@@ -59,9 +62,9 @@ public final class SparkBatch {
     }
 
     /** One input on an executor: the same options as {@code morse batch} gives, one thread per task. */
-    static Line computeOne(BatchItem item, Request request, boolean cohenMacaulay) {
-        BatchOptions options = new BatchOptions(request, new ImageOptions(OptionalInt.empty(), false, Optional.empty()),
-                1, cohenMacaulay);
+    static Line computeOne(BatchItem item, Request request, GraphComplex graphAs, boolean cohenMacaulay) {
+        BatchOptions options = new BatchOptions(request, new ReadOptions(new ImageOptions(OptionalInt.empty(), false,
+                Optional.empty()), graphAs), 1, cohenMacaulay);
         BatchOutcome outcome;
         try {
             outcome = BatchRun.compute(item, options);

@@ -7,6 +7,7 @@ import dev.morse.batch.BatchItem;
 import dev.morse.batch.BatchOptions;
 import dev.morse.batch.BatchRun;
 import dev.morse.engine.Request;
+import dev.morse.input.ReadOptions;
 import dev.morse.image.ImageOptions;
 import dev.morse.report.BatchJsonWriter;
 import java.nio.charset.StandardCharsets;
@@ -49,10 +50,11 @@ class SparkBatchTest {
     private static List<String> lines(List<BatchItem> items, Request request, boolean cohenMacaulay, boolean onSpark) {
         List<String> out = new ArrayList<>();
         if (onSpark) {
-            SparkBatch.run(spark, items, request, cohenMacaulay, line -> out.add(withoutTimings(line)));
+            SparkBatch.run(spark, items, request, ReadOptions.DEFAULT_GRAPH_COMPLEX, cohenMacaulay,
+                    line -> out.add(withoutTimings(line)));
         } else {
-            BatchOptions options = new BatchOptions(request, new ImageOptions(OptionalInt.empty(), false, Optional.empty()),
-                    1, cohenMacaulay);
+            BatchOptions options = new BatchOptions(request, ReadOptions.of(new ImageOptions(OptionalInt.empty(), false,
+                    Optional.empty())), 1, cohenMacaulay);
             BatchRun.run(items, options, o -> BatchJsonWriter.toJsonLine(o, cohenMacaulay), line -> out.add(withoutTimings(line)));
         }
         return out;
@@ -76,7 +78,7 @@ class SparkBatchTest {
         List<BatchItem> items = List.of(new BatchItem(0, loop.toString()), new BatchItem(1, cycle.toString()),
                 new BatchItem(2, dir.resolve("missing.poset").toString()), new BatchItem(3, loop.toString()));
         List<String> there = new ArrayList<>();
-        int failed = SparkBatch.run(spark, items, Request.defaults(), false, there::add);
+        int failed = SparkBatch.run(spark, items, Request.defaults(), ReadOptions.DEFAULT_GRAPH_COMPLEX, false, there::add);
         assertEquals(2, failed);
         assertEquals(4, there.size());
         // the reader's message for a cycle names its elements in order (shared/DESIGN.md, errors)

@@ -1,0 +1,113 @@
+package dev.morse.io;
+
+import java.util.Arrays;
+
+/**
+ * One boundary matrix as read from a file: its size and its nonzero entries column by column (a
+ * column per cell of the higher dimension, a row per cell of the lower), rows ascending within a
+ * column. Memory: 8 bytes per entry and 4 per column. Immutable.
+ */
+public final class BoundaryMatrix {
+    private final String source;
+    private final int rows;
+    private final int columns;
+    private final int[] offsets;
+    private final int[] rowIndex;
+    private final int[] values;
+
+    private BoundaryMatrix(String source, int rows, int columns, int[] offsets, int[] rowIndex, int[] values) {
+        this.source = source;
+        this.rows = rows;
+        this.columns = columns;
+        this.offsets = offsets;
+        this.rowIndex = rowIndex;
+        this.values = values;
+    }
+
+    /**
+     * Sorts entries given in any order into columns.
+     *
+     * @param lines the line of each entry, to name when a position is given twice
+     * @throws InputException when a position is given twice
+     */
+    static BoundaryMatrix of(String source, int rows, int columns, int[] entryRows, int[] entryColumns, int[] values,
+            int[] lines) {
+        int n = entryRows.length;
+        int[] offsets = new int[columns + 1];
+        for (int c : entryColumns) {
+            offsets[c + 1]++;
+        }
+        for (int c = 0; c < columns; c++) {
+            offsets[c + 1] += offsets[c];
+        }
+        int[] fill = Arrays.copyOf(offsets, columns);
+        int[] order = new int[n];
+        for (int i = 0; i < n; i++) {
+            order[fill[entryColumns[i]]++] = i;
+        }
+        int[] rowIndex = new int[n];
+        int[] sortedValues = new int[n];
+        for (int c = 0; c < columns; c++) {
+            int from = offsets[c];
+            int to = offsets[c + 1];
+            // rows within a column, ascending; columns are short, and the writer's are already sorted
+            Integer[] slice = new Integer[to - from];
+            for (int k = from; k < to; k++) {
+                slice[k - from] = order[k];
+            }
+            Arrays.sort(slice, (a, b) -> a.equals(b) ? 0
+                    : entryRows[a] != entryRows[b] ? Integer.compare(entryRows[a], entryRows[b]) : Integer.compare(a, b));
+            for (int k = from; k < to; k++) {
+                int entry = slice[k - from];
+                if (k > from && entryRows[slice[k - from - 1]] == entryRows[entry]) {
+                    throw new InputException(source, lines[entry], "the entry at row " + (entryRows[entry] + 1)
+                            + ", column " + (c + 1) + " is given a second time (first on line "
+                            + lines[slice[k - from - 1]] + ")");
+                }
+                rowIndex[k] = entryRows[entry];
+                sortedValues[k] = values[entry];
+            }
+        }
+        return new BoundaryMatrix(source, rows, columns, offsets, rowIndex, sortedValues);
+    }
+
+    /** The file it was read from, as given. */
+    public String source() {
+        return source;
+    }
+
+    /** Number of rows: cells of the lower dimension. */
+    public int rows() {
+        return rows;
+    }
+
+    /** Number of columns: cells of the higher dimension. */
+    public int columns() {
+        return columns;
+    }
+
+    /** Number of nonzero entries. */
+    public int nonZeros() {
+        return rowIndex.length;
+    }
+
+    /** Index of the first entry of column {@code c}. */
+    public int start(int c) {
+        return offsets[c];
+    }
+
+    /** Index past the last entry of column {@code c}. */
+    public int end(int c) {
+        return offsets[c + 1];
+    }
+
+    /** The 0-based row of entry {@code i}. */
+    public int row(int i) {
+        return rowIndex[i];
+    }
+
+    /** The value of entry {@code i}, never 0. */
+    public int value(int i) {
+        return values[i];
+    }
+}

@@ -1,14 +1,12 @@
 package dev.morse.graph;
 
 import dev.morse.io.InputException;
+import dev.morse.io.TextFiles;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import it.unimi.dsi.fastutil.objects.Object2IntLinkedOpenHashMap;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -16,6 +14,7 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.jgrapht.graph.DefaultEdge;
 import org.jgrapht.graph.builder.GraphTypeBuilder;
+import org.jgrapht.nio.GraphImporter;
 import org.jgrapht.nio.ImportException;
 import org.jgrapht.nio.dot.DOTImporter;
 import org.jgrapht.nio.graphml.GraphMLImporter;
@@ -36,27 +35,25 @@ public final class GraphReader {
 
     /** Reads a DOT file. */
     public static Graph readDot(Path file) throws IOException {
-        String source = file.toString();
-        boolean directed = isDirected(file);
-        org.jgrapht.Graph<String, DefaultEdge> graph = emptyGraph(directed);
         DOTImporter<String, DefaultEdge> importer = new DOTImporter<>();
         importer.setVertexFactory(id -> id);
-        try (Reader reader = utf8(file)) {
-            importer.importGraph(graph, reader);
-        } catch (ImportException | IllegalArgumentException e) {
-            throw failure(source, e);
-        }
-        return fromJgrapht(graph, source);
+        return imported(file, isDirected(file), importer);
     }
 
     /** Reads a GraphML file; the XML is not checked against the GraphML schema, only parsed. */
     public static Graph readGraphml(Path file) throws IOException {
-        String source = file.toString();
-        org.jgrapht.Graph<String, DefaultEdge> graph = emptyGraph(false);
         GraphMLImporter<String, DefaultEdge> importer = new GraphMLImporter<>();
         importer.setSchemaValidation(false);
         importer.setVertexFactory(id -> id);
-        try (Reader reader = utf8(file)) {
+        return imported(file, false, importer);
+    }
+
+    /** Reads {@code file} into a graph of that kind with {@code importer}, every failure one line. */
+    private static Graph imported(Path file, boolean directed, GraphImporter<String, DefaultEdge> importer)
+            throws IOException {
+        String source = file.toString();
+        org.jgrapht.Graph<String, DefaultEdge> graph = emptyGraph(directed);
+        try (Reader reader = TextFiles.utf8(file)) {
             importer.importGraph(graph, reader);
         } catch (ImportException | IllegalArgumentException e) {
             throw failure(source, e);
@@ -69,11 +66,7 @@ public final class GraphReader {
      * words without white space; {@code #} starts a comment.
      */
     public static Graph readEdges(Path file) throws IOException {
-        try (BufferedReader reader = utf8(file)) {
-            return readEdges(reader, file.toString());
-        } catch (java.nio.charset.CharacterCodingException e) {
-            throw new InputException(file.toString(), InputException.NO_LINE, "not valid UTF-8 text");
-        }
+        return TextFiles.read(file, GraphReader::readEdges);
     }
 
     /** Reads an edge list from {@code reader}; {@code source} names it in error messages. */
@@ -148,7 +141,7 @@ public final class GraphReader {
 
     /** Whether a DOT file declares a digraph; the importer wants a graph of the same kind. */
     private static boolean isDirected(Path file) throws IOException {
-        try (BufferedReader reader = utf8(file)) {
+        try (BufferedReader reader = TextFiles.utf8(file)) {
             char[] start = new char[4096];
             int length = Math.max(0, reader.read(start));
             String text = new String(start, 0, length).replaceAll("(?s)/\\*.*?\\*/", " ")
@@ -173,9 +166,4 @@ public final class GraphReader {
         return flat.length() > 300 ? flat.substring(0, 300) + "..." : flat;
     }
 
-    private static BufferedReader utf8(Path file) throws IOException {
-        return new BufferedReader(new java.io.InputStreamReader(Files.newInputStream(file),
-                StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                        .onUnmappableCharacter(CodingErrorAction.REPORT)));
-    }
 }

@@ -3,7 +3,6 @@ package dev.morse.io;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.io.StringReader;
 import java.io.UncheckedIOException;
 
 /**
@@ -30,21 +29,6 @@ final class ContentLines {
         return lines;
     }
 
-    /** Reads text held in a string, where reading cannot fail. */
-    static <T> T fromString(String text, String source, TextRead<T> read) {
-        try {
-            return read.read(new StringReader(text), source);
-        } catch (IOException e) {
-            throw new AssertionError("a string reader does not fail", e);
-        }
-    }
-
-    /** A reader of one text format. */
-    @FunctionalInterface
-    interface TextRead<T> {
-        /** Reads all of {@code reader}; {@code source} names it in error messages. */
-        T read(Reader reader, String source) throws IOException;
-    }
 
     /** The next meaningful line, or {@code null} at the end. */
     String next() {

@@ -3,7 +3,6 @@ package dev.morse.io;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.io.StringReader;
 import java.nio.file.Path;
 
 /**
@@ -69,7 +68,7 @@ public enum InputFormat {
      *     when the header names no format known here
      */
     public static InputFormat detect(Path file) throws IOException {
-        try (BufferedReader reader = PosetReader.utf8(file)) {
+        try (BufferedReader reader = TextFiles.utf8(file)) {
             return detect(reader, file.toString());
         }
     }
@@ -151,11 +150,7 @@ public enum InputFormat {
 
     /** The format of text held in a string; {@code source} names it in error messages. */
     public static InputFormat detect(String text, String source) {
-        try {
-            return detect(new StringReader(text), source);
-        } catch (IOException e) {
-            throw new AssertionError("a string reader does not fail", e);
-        }
+        return TextFiles.fromString(text, source, InputFormat::detect);
     }
 
     /** The format of text read from {@code reader}; {@code source} names it in error messages. */

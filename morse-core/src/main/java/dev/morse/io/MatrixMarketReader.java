@@ -4,7 +4,6 @@ import it.unimi.dsi.fastutil.ints.IntArrayList;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.io.StringReader;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.nio.file.Path;
@@ -28,20 +27,12 @@ public final class MatrixMarketReader {
 
     /** Reads a matrix file. */
     public static BoundaryMatrix read(Path file) throws IOException {
-        try (BufferedReader reader = PosetReader.utf8(file)) {
-            return read(reader, file.toString());
-        } catch (java.nio.charset.CharacterCodingException e) {
-            throw new InputException(file.toString(), InputException.NO_LINE, "not valid UTF-8 text");
-        }
+        return TextFiles.read(file, MatrixMarketReader::read);
     }
 
     /** Reads matrix text held in a string; {@code source} names it in error messages. */
     public static BoundaryMatrix parse(String text, String source) {
-        try {
-            return read(new StringReader(text), source);
-        } catch (IOException e) {
-            throw new AssertionError("a string reader does not fail", e);
-        }
+        return TextFiles.fromString(text, source, MatrixMarketReader::read);
     }
 
     /** Reads matrix text; {@code source} names it in error messages. */

@@ -7,8 +7,6 @@ import dev.morse.progress.Progress;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
@@ -37,14 +35,14 @@ public final class PosetReader {
             return parsed;
         }
         // not plain ASCII, or something is wrong: the text reader decides, and words any error
-        try (BufferedReader reader = utf8(file)) {
+        try (BufferedReader reader = TextFiles.utf8(file)) {
             return read(reader, file.toString());
         }
     }
 
     /** Reads poset text from a string; {@code source} names it in error messages. */
     public static Poset parse(String text, String source) {
-        return ContentLines.fromString(text, source, PosetReader::read);
+        return TextFiles.fromString(text, source, PosetReader::read);
     }
 
     /** Reads poset text from {@code reader}; {@code source} names it in error messages. */
@@ -128,10 +126,4 @@ public final class PosetReader {
         return new InputException(source, e.tag(), text.toString());
     }
 
-    static BufferedReader utf8(Path file) throws IOException {
-        return new BufferedReader(new java.io.InputStreamReader(Files.newInputStream(file),
-                StandardCharsets.UTF_8.newDecoder()
-                        .onMalformedInput(CodingErrorAction.REPORT)
-                        .onUnmappableCharacter(CodingErrorAction.REPORT)), 1 << 16);
-    }
 }

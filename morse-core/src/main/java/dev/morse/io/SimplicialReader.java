@@ -5,7 +5,6 @@ import dev.morse.progress.Progress;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import it.unimi.dsi.fastutil.ints.IntOpenHashSet;
 import it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap;
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
 import java.nio.file.Path;
@@ -27,14 +26,12 @@ public final class SimplicialReader {
 
     /** Reads a simplicial file. */
     public static Facets read(Path file) throws IOException {
-        try (BufferedReader reader = PosetReader.utf8(file)) {
-            return read(reader, file.toString());
-        }
+        return TextFiles.read(file, SimplicialReader::read);
     }
 
     /** Reads simplicial text from a string; {@code source} names it in error messages. */
     public static Facets parse(String text, String source) {
-        return ContentLines.fromString(text, source, SimplicialReader::read);
+        return TextFiles.fromString(text, source, SimplicialReader::read);
     }
 
     /** Reads simplicial text; {@code source} names it in error messages. */

@@ -1,13 +1,10 @@
 package dev.morse.mesh;
 
 import dev.morse.io.InputException;
+import dev.morse.io.TextFiles;
 import it.unimi.dsi.fastutil.ints.IntArrayList;
 import java.io.BufferedReader;
 import java.io.IOException;
-import java.io.StringReader;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 
 /**
@@ -30,38 +27,22 @@ public final class MeshReader {
 
     /** Reads an OBJ file. */
     public static PolygonMesh readObj(Path file) throws IOException {
-        try (BufferedReader reader = utf8(file)) {
-            return readObj(reader, file.toString());
-        } catch (java.nio.charset.CharacterCodingException e) {
-            throw new InputException(file.toString(), InputException.NO_LINE, "not valid UTF-8 text");
-        }
+        return TextFiles.read(file, MeshReader::readObj);
     }
 
     /** Reads OBJ text held in a string. */
     public static PolygonMesh parseObj(String text, String source) {
-        try {
-            return readObj(new BufferedReader(new StringReader(text)), source);
-        } catch (IOException e) {
-            throw new AssertionError("a string reader does not fail", e);
-        }
+        return TextFiles.fromString(text, source, MeshReader::readObj);
     }
 
     /** Reads an OFF file. */
     public static PolygonMesh readOff(Path file) throws IOException {
-        try (BufferedReader reader = utf8(file)) {
-            return readOff(reader, file.toString());
-        } catch (java.nio.charset.CharacterCodingException e) {
-            throw new InputException(file.toString(), InputException.NO_LINE, "not valid UTF-8 text");
-        }
+        return TextFiles.read(file, MeshReader::readOff);
     }
 
     /** Reads OFF text held in a string. */
     public static PolygonMesh parseOff(String text, String source) {
-        try {
-            return readOff(new BufferedReader(new StringReader(text)), source);
-        } catch (IOException e) {
-            throw new AssertionError("a string reader does not fail", e);
-        }
+        return TextFiles.fromString(text, source, MeshReader::readOff);
     }
 
     private static PolygonMesh readObj(BufferedReader reader, String source) throws IOException {
@@ -216,9 +197,4 @@ public final class MeshReader {
         return content.isEmpty() ? new String[0] : content.split("\\s+");
     }
 
-    private static BufferedReader utf8(Path file) throws IOException {
-        return new BufferedReader(new java.io.InputStreamReader(Files.newInputStream(file),
-                StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                        .onUnmappableCharacter(CodingErrorAction.REPORT)));
-    }
 }

@@ -17,6 +17,7 @@ import picocli.CommandLine.Spec;
         subcommands = {HomologyCommand.class, DemoCommand.class,
             InspectCommand.class, CompareCommand.class, DrawCommand.class, ExportCommand.class,
             GenerateCommand.class, OperationCommand.class, IntervalsCommand.class, BatchCommand.class,
+            CompletionCommand.class,
             CommandLine.HelpCommand.class},
         footer = "%nExit codes: 0 success, 2 bad input or options, 1 internal failure.")
 public final class MorseCommand implements Callable<Integer> {

@@ -104,7 +104,8 @@ final class DrawCommand implements Callable<Integer> {
                     throw new InputException(input.source(), InputException.NO_LINE, "an image with its cycles is"
                             + " drawn as SVG only; leave out --format " + format.optionName());
                 }
-                return new Picture(ImageCycleOverlay.toSvg(Engines.compute(input, request)), "");
+                ImageCycleOverlay.Overlay overlay = ImageCycleOverlay.of(Engines.compute(input, request));
+                return new Picture(overlay.svg(), "\n" + overlay.caption() + "\n");
             }
             return hasse(HasseDrawings.draw(input, request, choice));
         });

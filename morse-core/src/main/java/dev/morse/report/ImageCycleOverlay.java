@@ -29,22 +29,31 @@ public final class ImageCycleOverlay {
     }
 
     /**
+     * The picture and what it shows.
+     *
+     * @param svg the SVG document
+     * @param caption one line saying what is drawn
+     */
+    public record Overlay(String svg, String caption) {
+    }
+
+    /**
      * The picture of {@code run}, an image or volume, with the H_1 cycles that
      * {@link RepresentativeCycles#of} finds.
      *
      * @throws InputException when the input is not an image, or the cycles cannot be found on this run
      */
-    public static String toSvg(Computation run) {
+    public static Overlay of(Computation run) {
         if (!(run.input() instanceof VoxelInput image)) {
             throw new InputException(run.source(), InputException.NO_LINE, "only an image or volume is drawn with its"
                     + " cycles over it");
         }
         List<Cycle> loops = RepresentativeCycles.of(run).stream().filter(c -> c.dimension() == 1).toList();
-        return toSvg(run.source(), image.image().voxels(), loops);
+        return draw(run.source(), image.image().voxels(), loops);
     }
 
     /** The picture of {@code voxels} with each of {@code loops}, 1-cycles in pixel units, in its own colour. */
-    static String toSvg(String source, VoxelSet voxels, List<Cycle> loops) {
+    static Overlay draw(String source, VoxelSet voxels, List<Cycle> loops) {
         int width = voxels.size(0);
         int height = voxels.axes() > 1 ? voxels.size(1) : 1;
         int depth = voxels.axes() > 2 ? voxels.size(2) : 1;
@@ -118,7 +127,7 @@ public final class ImageCycleOverlay {
                     + Counted.of(loop.terms().size(), "edge") + (edges < loop.terms().size() ? " (" + edges
                     + " seen from above)" : ""), "x", Svg.number(MARGIN + 24), "y", Svg.number(ly), "font-size", "11");
         }
-        return svg.finish();
+        return new Overlay(svg.finish(), caption);
     }
 
     private static boolean columnHolds(VoxelSet voxels, int x, int y, int depth) {

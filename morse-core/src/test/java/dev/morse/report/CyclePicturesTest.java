@@ -87,7 +87,7 @@ class CyclePicturesTest {
         }
         assertEquals(Set.of(0, 1), holesGoneRound);
 
-        Document doc = SvgPicturesTest.parse(ImageCycleOverlay.toSvg(run));
+        Document doc = SvgPicturesTest.parse(ImageCycleOverlay.of(run).svg());
         NodeList paths = doc.getElementsByTagNameNS("http://www.w3.org/2000/svg", "path");
         Set<String> colours = new HashSet<>();
         int drawn = 0;

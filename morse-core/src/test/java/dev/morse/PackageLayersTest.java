@@ -34,7 +34,7 @@ class PackageLayersTest {
     /** The packages under {@code dev.morse}, lowest first; a package may use only those before it. */
     static final List<String> LAYERS = List.of("progress", "parallel", "poset", "complex", "homology", "matching",
             "morsecomplex", "cw", "posetreduction", "implicit", "io", "image", "graph", "mesh", "input", "engine", "cycles", "interval",
-            "batch", "inspect", "report", "generate");
+            "batch", "inspect", "layout", "report", "generate");
 
     private static final Path SOURCES = Path.of("src", "main", "java");
     private static final Pattern PACKAGE = Pattern.compile("^\\s*package\\s+dev\\.morse\\.([a-z_][a-z0-9_]*)[.;]",

@@ -18,6 +18,7 @@ import picocli.CommandLine.Spec;
             InspectCommand.class, CompareCommand.class, DrawCommand.class, ExportCommand.class,
             GenerateCommand.class, OperationCommand.class, IntervalsCommand.class, BatchCommand.class,
             HardLibraryCommand.class,
+            CompletionCommand.class,
             CommandLine.HelpCommand.class},
         footer = "%nExit codes: 0 success, 2 bad input or options, 1 internal failure.")
 public final class MorseCommand implements Callable<Integer> {

@@ -2,6 +2,7 @@ package dev.morse.cli;
 
 import dev.morse.complex.ComplexChoice;
 import dev.morse.generate.FacePart;
+import dev.morse.report.CycleChoice;
 import dev.morse.image.VolumeSize;
 import java.util.Collections;
 import java.util.Set;
@@ -180,6 +181,13 @@ final class OptionConverters {
                 }
             }
             return new Ranks(ranks);
+        }
+    }
+
+    /** {@code D} or {@code D:K}: the K-th generator of H_D. */
+    static final class CycleChoiceConverter extends Parsed<CycleChoice> {
+        CycleChoiceConverter() {
+            super(CycleChoice::parse);
         }
     }
 }

@@ -29,9 +29,12 @@ public final class HasseDrawing {
     private final boolean[] critical;
     private final String caption;
     private final String note;
+    private final String levelName;
+    private final CycleMark cycle;
+    private final boolean[] cycleCovers;
 
     private HasseDrawing(List<String> labels, int[] levels, int[] lower, int[] upper, boolean[] matched,
-            boolean[] critical, String caption, String note) {
+            boolean[] critical, String caption, String note, String levelName, CycleMark cycle) {
         if (labels.size() > MAX_NODES) {
             throw new IllegalArgumentException(labels.size() + " nodes are more than a picture takes (" + MAX_NODES + ")");
         }
@@ -43,6 +46,35 @@ public final class HasseDrawing {
         this.critical = critical;
         this.caption = Objects.requireNonNull(caption, "caption");
         this.note = Objects.requireNonNull(note, "note");
+        this.levelName = Objects.requireNonNull(levelName, "levelName");
+        this.cycle = cycle;
+        this.cycleCovers = cycle == null ? null : cycle.covers();
+        if (cycle != null && (cycle.coefficients().size() != labels.size() || cycleCovers.length != lower.length)) {
+            throw new IllegalArgumentException("a cycle mark has one entry per node and one per cover");
+        }
+    }
+
+    /**
+     * The cells of one representative cycle marked on a drawing.
+     *
+     * @param description one line naming the cycle (dimension, generator, size)
+     * @param coefficients per node its coefficient in the cycle as written, empty for a node in the
+     *     cycle without one (an element on its chains), null for a node not in it
+     * @param covers per cover whether the cycle runs along it (consecutive elements of one of its chains)
+     */
+    public record CycleMark(String description, List<String> coefficients, boolean[] covers) {
+        /** Copies. */
+        public CycleMark {
+            Objects.requireNonNull(description, "description");
+            coefficients = java.util.Collections.unmodifiableList(new java.util.ArrayList<>(coefficients));
+            covers = covers.clone();
+        }
+
+        /** A copy of the covers' marks. */
+        @Override
+        public boolean[] covers() {
+            return covers.clone();
+        }
     }
 
     /**
@@ -70,7 +102,13 @@ public final class HasseDrawing {
                 e++;
             }
         }
-        return new HasseDrawing(Arrays.asList(labels), levels, lo, up, null, null, caption, note);
+        boolean graded = true;
+        for (int k = 0; k < lo.length; k++) {
+            graded &= levels[up[k]] == levels[lo[k]] + 1;
+        }
+        // by height; in a graded poset that is the rank
+        return new HasseDrawing(Arrays.asList(labels), levels, lo, up, null, null, caption, note,
+                graded ? "rank" : "height", null);
     }
 
     /**
@@ -107,7 +145,13 @@ public final class HasseDrawing {
             matched[e] = matching.mate(lo.getInt(e)) == up.getInt(e);
         }
         return new HasseDrawing(Arrays.asList(labels), levels, lo.toIntArray(), up.toIntArray(), matched, critical,
-                caption, "");
+                caption, "", "dim", null);
+    }
+
+    /** This drawing with the cells of one cycle marked as well. */
+    public HasseDrawing withCycle(CycleMark mark) {
+        return new HasseDrawing(labels, levels, lower, upper, matched, critical, caption, note, levelName,
+                Objects.requireNonNull(mark, "mark"));
     }
 
     /** Number of nodes. */
@@ -181,6 +225,50 @@ public final class HasseDrawing {
     /** Further words on what is shown, or empty. */
     public String note() {
         return note;
+    }
+
+    /** What a level is: {@code rank} (a graded poset), {@code height} (any other poset) or {@code dim} (cells). */
+    public String levelName() {
+        return levelName;
+    }
+
+    /** The node matched with {@code v}, or -1 when it is critical or nothing is marked. */
+    public int partner(int v) {
+        if (matched == null) {
+            return -1;
+        }
+        for (int e = 0; e < lower.length; e++) {
+            if (matched[e] && (lower[e] == v || upper[e] == v)) {
+                return lower[e] == v ? upper[e] : lower[e];
+            }
+        }
+        return -1;
+    }
+
+    /** Whether the cells of a cycle are marked. */
+    public boolean hasCycle() {
+        return cycle != null;
+    }
+
+    /** The line naming the marked cycle; empty without one. */
+    public String cycleDescription() {
+        return cycle == null ? "" : cycle.description();
+    }
+
+    /** Whether node {@code v} belongs to the marked cycle. */
+    public boolean inCycle(int v) {
+        return cycle != null && cycle.coefficients().get(v) != null;
+    }
+
+    /** The coefficient of node {@code v} in the marked cycle, empty when it has none or is not in it. */
+    public String cycleCoefficient(int v) {
+        String a = cycle == null ? null : cycle.coefficients().get(v);
+        return a == null ? "" : a;
+    }
+
+    /** Whether the marked cycle runs along cover {@code e}. */
+    public boolean coverInCycle(int e) {
+        return cycleCovers != null && cycleCovers[e];
     }
 
     /** The top level, -1 without nodes. */

@@ -17,6 +17,13 @@ import dev.morse.matching.Matching;
 import dev.morse.matching.MatchingVerdict;
 import dev.morse.matching.MatchingVerifier;
 import dev.morse.poset.Poset;
+import dev.morse.cycles.Cycle;
+import dev.morse.cycles.RepresentativeCycles;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
 
 /**
  * Hasse diagram pictures of one input, at most {@link HasseDrawing#MAX_NODES} nodes: the face poset
@@ -38,6 +45,21 @@ public final class HasseDrawings {
      * @throws InputException for an input too large to draw, or a request that does not apply to it
      */
     public static HasseDrawing draw(Input input, Request request) {
+        return draw(input, request, null);
+    }
+
+    /**
+     * As {@link #draw(Input, Request)}, with the cells of the representative cycle {@code choice}
+     * marked. On the face poset of a complex these are the cells of the cycle, each with its
+     * coefficient. On a poset that is not a CW poset the cycle's cells are chains of the order
+     * complex, computed as {@code homology} would, so the elements on its chains are marked, and the
+     * covers between consecutive elements of one of its chains.
+     *
+     * @param choice the cycle to mark; null for none
+     * @throws InputException as {@link #draw(Input, Request)}, for a cycle that does not exist, or
+     *     when the cycles cannot be found on this run ({@link RepresentativeCycles#of})
+     */
+    public static HasseDrawing draw(Input input, Request request, CycleChoice choice) {
         // a picture shows the input's own complex, so the poset is not shrunk first
         Request small = request.withMaxStoredCells(HasseDrawing.MAX_NODES).withPosetReduction(false);
         if (input instanceof PosetInput posetInput && request.complex() != ComplexChoice.ORDER
@@ -49,10 +71,11 @@ public final class HasseDrawings {
             if (request.complex() == ComplexChoice.AUTO) {
                 CwPosetVerdict verdict = CwPosetCheck.check(poset);
                 if (!verdict.isCwPoset()) {
-                    return HasseDrawing.ofPoset(poset, input.source() + ": Hasse diagram of a poset that is not a CW"
+                    HasseDrawing plain = HasseDrawing.ofPoset(poset, input.source() + ": Hasse diagram of a poset that is not a CW"
                             + " poset; nothing marked", "Not a CW poset: " + verdict.reason() + ". Its matching is made"
                             + " on the order complex, whose cells are chains, not elements, so no pair of elements here"
                             + " is matched; the order complex can be drawn instead.");
+                    return choice == null ? plain : withChainCycle(plain, poset, Engines.compute(input, request), choice);
                 }
             }
         }
@@ -66,7 +89,45 @@ public final class HasseDrawings {
             }
             throw e;
         }
-        return of(run);
+        HasseDrawing drawing = of(run);
+        return choice == null ? drawing : withCellCycle(drawing, run, choice);
+    }
+
+    /** The cells of the chosen cycle, each with its coefficient: node ids are cell ids. */
+    private static HasseDrawing withCellCycle(HasseDrawing drawing, Computation run, CycleChoice choice) {
+        CycleChoice.Chosen chosen = choice.pick(RepresentativeCycles.of(run), run.source());
+        List<String> coefficients = new ArrayList<>(Collections.nCopies(drawing.nodeCount(), (String) null));
+        for (Cycle.Term t : chosen.cycle().terms()) {
+            coefficients.set(t.cell(), t.coefficient().toString());
+        }
+        return drawing.withCycle(new HasseDrawing.CycleMark(chosen.description(), coefficients,
+                new boolean[drawing.coverCount()]));
+    }
+
+    /** The elements on the chains of the chosen cycle, and the covers along them. */
+    private static HasseDrawing withChainCycle(HasseDrawing drawing, Poset poset, Computation run, CycleChoice choice) {
+        CycleChoice.Chosen chosen = choice.pick(RepresentativeCycles.of(run), run.source());
+        Map<Long, Integer> coverIndex = new HashMap<>();
+        for (int e = 0; e < drawing.coverCount(); e++) {
+            coverIndex.put(((long) drawing.lowerEnd(e) << 32) | drawing.upperEnd(e), e);
+        }
+        List<String> coefficients = new ArrayList<>(Collections.nCopies(drawing.nodeCount(), (String) null));
+        boolean[] covers = new boolean[drawing.coverCount()];
+        for (Cycle.Term t : chosen.cycle().terms()) {
+            int previous = -1;
+            for (Object label : t.label()) {
+                // a chain of the order complex, written by its elements' labels from the bottom up
+                int x = poset.find((String) label).orElseThrow();
+                coefficients.set(x, "");
+                Integer e = previous < 0 ? null : coverIndex.get(((long) previous << 32) | x);
+                if (e != null) {
+                    covers[e] = true;
+                }
+                previous = x;
+            }
+        }
+        return drawing.withCycle(new HasseDrawing.CycleMark(chosen.description() + " (chains of the order complex;"
+                + " their elements are marked)", coefficients, covers));
     }
 
     /**

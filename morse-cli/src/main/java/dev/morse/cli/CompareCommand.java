@@ -50,7 +50,7 @@ final class CompareCommand implements Callable<Integer> {
     private MatchingRuns runs;
 
     @Mixin
-    private JsonOption output;
+    private ReportOptions shown;
 
     @Option(names = "--no-optimum", description = "Do not seek the exact optimum (sought by default on stored"
             + " complexes of at most 500 cells, within --time-limit).")
@@ -59,9 +59,6 @@ final class CompareCommand implements Callable<Integer> {
     @Option(names = "--plot", paramLabel = "FILE.svg",
             description = "Also draw a bar chart of critical cells per dimension and matching, bounds marked, as SVG.")
     private Path plot;
-
-    @Mixin
-    private RunOptions run;
 
     @Override
     public Integer call() throws Exception {
@@ -74,12 +71,12 @@ final class CompareCommand implements Callable<Integer> {
             }
         }
         List<Input> read = new ArrayList<>(1);
-        ComparisonReport report = run.around(spec, () -> {
+        ComparisonReport report = shown.around(spec, () -> {
             read.add(input.read(spec));
             return HeuristicComparison.run(read.get(0), request, Optional.ofNullable(matchings), !noOptimum);
         });
         Warnings.print(spec, input.warnings(read.get(0)));
-        String text = output.json() ? ComparisonJsonWriter.toJson(report) : ComparisonTextWriter.toText(report);
+        String text = shown.json() ? ComparisonJsonWriter.toJson(report) : ComparisonTextWriter.toText(report);
         if (plot != null) {
             OutputFiles.write(plot, ComparisonChartSvg.toSvg(report));
         }

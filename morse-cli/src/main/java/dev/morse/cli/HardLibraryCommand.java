@@ -38,10 +38,7 @@ final class HardLibraryCommand implements Callable<Integer> {
     private MatchingRuns runs;
 
     @Mixin
-    private JsonOption output;
-
-    @Mixin
-    private RunOptions run;
+    private ReportOptions shown;
 
     @Override
     public Integer call() throws Exception {
@@ -55,9 +52,9 @@ final class HardLibraryCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             throw new ParameterException(spec.commandLine(), e.getMessage());
         }
-        List<ComparisonReport> reports = run.around(spec,
+        List<ComparisonReport> reports = shown.around(spec,
                 () -> HardLibraryComparison.run(request, Optional.ofNullable(matchings)));
-        String text = output.json() ? ComparisonSummaryWriter.toJson(reports) : ComparisonSummaryWriter.toText(reports);
+        String text = shown.json() ? ComparisonSummaryWriter.toJson(reports) : ComparisonSummaryWriter.toText(reports);
         PrintWriter out = spec.commandLine().getOut();
         out.print(text);
         out.flush();

@@ -30,17 +30,14 @@ final class InspectCommand implements Callable<Integer> {
     private InputOptions input;
 
     @Mixin
-    private JsonOption output;
-
-    @Mixin
-    private RunOptions run;
+    private ReportOptions shown;
 
     @Override
     public Integer call() throws Exception {
-        String text = run.around(spec, () -> {
+        String text = shown.around(spec, () -> {
             Input read = input.read(spec);
             try {
-                return output.json() ? InspectionJsonWriter.toJson(read) : InspectionTextWriter.toText(read);
+                return shown.json() ? InspectionJsonWriter.toJson(read) : InspectionTextWriter.toText(read);
             } catch (IllegalStateException e) {
                 // the complexes refuse to build past their cell limits with this exception, before allocating
                 throw new InputException(read.source(), InputException.NO_LINE, "too large to compute: " + e.getMessage());

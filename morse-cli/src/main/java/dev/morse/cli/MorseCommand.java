@@ -27,17 +27,25 @@ public final class MorseCommand implements Callable<Integer> {
 
     /** Runs the command line and exits with its exit code. */
     public static void main(String[] args) {
+        System.exit(run("morse", newCommandLine(), args));
+    }
+
+    /**
+     * Runs {@code line} on {@code args} with UTF-8 output and returns the exit code; failures outside
+     * the commands (parsing, help) become one line under {@code name}, as the commands' own do.
+     */
+    static int run(String name, CommandLine line, String[] args) {
         PrintWriter out = new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
         PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
         int code;
         try {
-            code = newCommandLine().setOut(out).setErr(err).execute(args);
+            code = line.setOut(out).setErr(err).execute(args);
         } catch (OutOfMemoryError e) {
             // Failures turns the commands' Errors into messages; this is for one outside them (parsing, help)
             err.println(Failures.outOfMemory(Runtime.getRuntime().maxMemory()));
             code = Failures.BAD_INPUT;
         } catch (Throwable e) {
-            err.println("morse: internal error: " + e);
+            err.println(name + ": internal error: " + e);
             if (List.of(args).contains("--debug")) {
                 e.printStackTrace(err);
             }
@@ -45,7 +53,7 @@ public final class MorseCommand implements Callable<Integer> {
         }
         out.flush();
         err.flush();
-        System.exit(code);
+        return code;
     }
 
     /**
@@ -53,13 +61,24 @@ public final class MorseCommand implements Callable<Integer> {
      * writers before executing: they propagate to the subcommands registered here.
      */
     public static CommandLine newCommandLine() {
+        return configured(new MorseCommand());
+    }
+
+    /** The command line of {@code root} with the shared failure handling and version on every command. */
+    static CommandLine configured(Object root) {
         Failures failures = new Failures();
-        CommandLine line = new CommandLine(new MorseCommand())
+        CommandLine line = new CommandLine(root)
                 .setExecutionStrategy(failures)
                 .setExecutionExceptionHandler(failures)
                 .setParameterExceptionHandler(failures);
         withVersion(line, new VersionProvider());
         return line;
+    }
+
+    /** The usage error of a command run without one of its subcommands. */
+    static ParameterException subcommandRequired(CommandSpec spec) {
+        return new ParameterException(spec.commandLine(), "a subcommand is required: "
+                + String.join(", ", spec.subcommands().keySet()));
     }
 
     /** Gives every command the one version provider, so that {@code --version} answers the same anywhere. */
@@ -71,7 +90,6 @@ public final class MorseCommand implements Callable<Integer> {
     /** Without a subcommand there is nothing to do: a usage error. */
     @Override
     public Integer call() {
-        throw new ParameterException(spec.commandLine(), "a subcommand is required: "
-                + String.join(", ", spec.subcommands().keySet()));
+        throw subcommandRequired(spec);
     }
 }

@@ -49,10 +49,7 @@ final class SweepCommandOptions {
     private Path jsonl;
 
     @Mixin
-    private JsonOption output;
-
-    @Mixin
-    private RunOptions run;
+    private ReportOptions shown;
 
     /** Reads the file to sweep; see {@link InputReaders#read}. */
     Input read() throws IOException {
@@ -68,12 +65,12 @@ final class SweepCommandOptions {
 
     /** Runs {@code work} with the progress line, unless {@code --quiet}. */
     <T> T around(CommandSpec spec, Callable<T> work) throws Exception {
-        return run.around(spec, work);
+        return shown.around(spec, work);
     }
 
     /** Prints the report as text or JSON and writes the {@code --jsonl} file if asked; returns 0. */
     int print(CommandSpec spec, SweepReport report) throws IOException {
-        String text = output.json() ? IntervalJsonWriter.toJson(report, mobius) : IntervalTextWriter.toText(report, mobius);
+        String text = shown.json() ? IntervalJsonWriter.toJson(report, mobius) : IntervalTextWriter.toText(report, mobius);
         if (jsonl != null) {
             OutputFiles.write(jsonl, IntervalJsonWriter.toJsonLines(report));
         }

@@ -73,9 +73,9 @@ public final class MatrixMarketReader {
                 if (words.length != 3) {
                     throw new InputException(source, lineNumber, "expected the size line 'ROWS COLUMNS ENTRIES'");
                 }
-                rows = count(words[0], "rows", source, lineNumber);
-                columns = count(words[1], "columns", source, lineNumber);
-                announced = count(words[2], "entries", source, lineNumber);
+                rows = TextFiles.wholeNumber(words[0], "number of rows", source, lineNumber);
+                columns = TextFiles.wholeNumber(words[1], "number of columns", source, lineNumber);
+                announced = TextFiles.wholeNumber(words[2], "number of entries", source, lineNumber);
                 continue;
             }
             if (words.length != 3) {
@@ -107,18 +107,6 @@ public final class MatrixMarketReader {
                 values.toIntArray(), lines.toIntArray());
     }
 
-    private static int count(String word, String what, String source, int line) {
-        try {
-            int n = Integer.parseInt(word);
-            if (n >= 0) {
-                return n;
-            }
-        } catch (NumberFormatException e) {
-            // worded below
-        }
-        throw new InputException(source, line, "the number of " + what + " must be a whole number from 0 to "
-                + Integer.MAX_VALUE + ", not '" + word + "'");
-    }
 
     private static int index(String word, int size, String what, String source, int line) {
         try {

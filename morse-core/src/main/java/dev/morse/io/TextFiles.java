@@ -52,4 +52,21 @@ public final class TextFiles {
                 .onMalformedInput(CodingErrorAction.REPORT)
                 .onUnmappableCharacter(CodingErrorAction.REPORT)), 1 << 16);
     }
+
+    /**
+     * {@code word} as a whole number from 0 to {@link Integer#MAX_VALUE}, or an {@link InputException}
+     * on line {@code line} saying that {@code what} must be one.
+     */
+    public static int wholeNumber(String word, String what, String source, int line) {
+        try {
+            int n = Integer.parseInt(word);
+            if (n >= 0) {
+                return n;
+            }
+        } catch (NumberFormatException e) {
+            // worded below
+        }
+        throw new InputException(source, line, "the " + what + " must be a whole number from 0 to "
+                + Integer.MAX_VALUE + ", not '" + word + "'");
+    }
 }

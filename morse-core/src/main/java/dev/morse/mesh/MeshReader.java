@@ -136,7 +136,7 @@ public final class MeshReader {
                 }
                 counts = new int[3];
                 for (int i = 0; i < 3; i++) {
-                    counts[i] = natural(words[from + i], source, number, "count");
+                    counts[i] = TextFiles.wholeNumber(words[from + i], "count", source, number);
                 }
                 continue;
             }
@@ -151,13 +151,13 @@ public final class MeshReader {
                 throw new InputException(source, number, "more lines than the " + counts[0] + " vertices and "
                         + counts[1] + " faces the counts announce");
             }
-            int k = natural(words[0], source, number, "number of vertices of a face");
+            int k = TextFiles.wholeNumber(words[0], "number of vertices of a face", source, number);
             if (words.length < k + 1) {
                 throw new InputException(source, number, "the face announces " + k + " vertices but lists "
                         + (words.length - 1));
             }
             for (int i = 1; i <= k; i++) {
-                int v = natural(words[i], source, number, "vertex index");
+                int v = TextFiles.wholeNumber(words[i], "vertex index", source, number);
                 if (v >= counts[0]) {
                     throw new InputException(source, number, "vertex index " + v + " is out of range: there are "
                             + counts[0] + " vertices, numbered from 0");
@@ -178,17 +178,6 @@ public final class MeshReader {
         return PolygonMesh.of(source, counts[0], 0, offsets.toIntArray(), corners.toIntArray(), lines.toIntArray());
     }
 
-    private static int natural(String word, String source, int line, String what) {
-        try {
-            int n = Integer.parseInt(word);
-            if (n >= 0) {
-                return n;
-            }
-        } catch (NumberFormatException e) {
-            // worded below
-        }
-        throw new InputException(source, line, "the " + what + " must be a whole number from 0, not '" + word + "'");
-    }
 
     /** The words of a line with its {@code #} comment cut off. */
     private static String[] words(String line) {

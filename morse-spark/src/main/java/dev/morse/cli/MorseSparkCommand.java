@@ -1,14 +1,9 @@
 package dev.morse.cli;
 
-import java.io.OutputStreamWriter;
-import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /**
@@ -27,40 +22,17 @@ public final class MorseSparkCommand implements Callable<Integer> {
 
     /** Runs the command line and exits with its exit code. */
     public static void main(String[] args) {
-        PrintWriter out = new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
-        PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
-        int code;
-        try {
-            code = newCommandLine().setOut(out).setErr(err).execute(args);
-        } catch (Throwable e) {
-            err.println("morse-spark: internal error: " + e);
-            if (List.of(args).contains("--debug")) {
-                e.printStackTrace(err);
-            }
-            code = Failures.INTERNAL_FAILURE;
-        }
-        out.flush();
-        err.flush();
-        System.exit(code);
+        System.exit(MorseCommand.run("morse-spark", newCommandLine(), args));
     }
 
-    /** A fresh command line with the shared failure handling installed. */
+    /** A fresh command line with the shared failure handling installed, as {@code morse} has. */
     public static CommandLine newCommandLine() {
-        Failures failures = new Failures();
-        CommandLine line = new CommandLine(new MorseSparkCommand())
-                .setExecutionStrategy(failures)
-                .setExecutionExceptionHandler(failures)
-                .setParameterExceptionHandler(failures);
-        VersionProvider provider = new VersionProvider();
-        line.getCommandSpec().versionProvider(provider);
-        line.getSubcommands().values().forEach(sub -> sub.getCommandSpec().versionProvider(provider));
-        return line;
+        return MorseCommand.configured(new MorseSparkCommand());
     }
 
     /** Without a subcommand there is nothing to do: a usage error. */
     @Override
     public Integer call() {
-        throw new ParameterException(spec.commandLine(), "a subcommand is required: "
-                + String.join(", ", spec.subcommands().keySet()));
+        throw MorseCommand.subcommandRequired(spec);
     }
 }

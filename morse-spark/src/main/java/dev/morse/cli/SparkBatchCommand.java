@@ -31,10 +31,6 @@ final class SparkBatchCommand implements Callable<Integer> {
     @Mixin
     private MasterOption master;
 
-    // accepted so that the options of 'morse' work here too; the master sets how much runs at once
-    @Mixin
-    private ThreadsOption threads;
-
     @Override
     public Integer call() throws Exception {
         var request = batch.request(spec);

@@ -46,10 +46,6 @@ final class SparkIntervalsCommand implements Callable<Integer> {
     @Mixin
     private MasterOption master;
 
-    // accepted so that the options of 'morse' work here too; the master sets how much runs at once
-    @Mixin
-    private ThreadsOption threads;
-
     @Override
     public Integer call() throws Exception {
         // the sweep of 'morse intervals' on one thread per task, so that every interval is computed alike

@@ -1,0 +1,24 @@
+package dev.morse.cli;
+
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** How a command that prints one report shows it: {@code --json} or a table, and the progress line. */
+final class ReportOptions {
+    @Mixin
+    private JsonOption output;
+
+    @Mixin
+    private RunOptions run;
+
+    /** Whether JSON was asked for. */
+    boolean json() {
+        return output.json();
+    }
+
+    /** Runs {@code work} with the progress line, unless {@code --quiet}. */
+    <T> T around(CommandSpec spec, Callable<T> work) throws Exception {
+        return run.around(spec, work);
+    }
+}

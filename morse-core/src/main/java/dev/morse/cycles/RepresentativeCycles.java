@@ -38,12 +38,17 @@ public final class RepresentativeCycles {
      * first, then one per torsion factor in the order of {@code torsion}; for reduced homology the
      * components of H̃_0 are differences of two vertices.
      *
-     * @throws InputException when the run kept no stored complex and Morse complex (the implicit
-     *     engine, or a coefficient beyond a long), or its Morse complex is beyond {@link #MAX_CRITICAL}
+     * @throws InputException when the run kept no Morse complex (a coefficient beyond a long), its
+     *     Morse complex is beyond {@link #MAX_CRITICAL}, or on the implicit engine a lift would follow
+     *     more than {@link ImplicitCycles#VISIT_LIMIT} chains
      * @throws IllegalStateException when a cycle fails its check or the count disagrees with the
      *     homology: an internal failure
      */
     public static List<Cycle> of(Computation run) {
+        if (run.implicitRun().isPresent() && run.plan().implicitPoset().isPresent()) {
+            requireFewCritical(run);
+            return ImplicitCycles.of(run, run.implicitRun().get(), run.plan().implicitPoset().get());
+        }
         if (run.complex().isEmpty() || run.matching().isEmpty()) {
             throw new InputException(run.source(), InputException.NO_LINE, "representative cycles need the cells"
                     + " stored, and the order complex here is generated on demand; --complex order stores them");
@@ -52,11 +57,7 @@ public final class RepresentativeCycles {
             throw new InputException(run.source(), InputException.NO_LINE, "representative cycles need a Morse"
                     + " complex, and this run built none (a coefficient left the range of a long)");
         }
-        if (run.totalCritical() > MAX_CRITICAL) {
-            throw new InputException(run.source(), InputException.NO_LINE, String.format(Locale.ROOT,
-                    "representative cycles are found on at most %,d critical cells, and this matching leaves %,d;"
-                            + " another --matching may leave fewer", MAX_CRITICAL, run.totalCritical()));
-        }
+        requireFewCritical(run);
         ChainComplex complex = run.complex().get();
         Matching matching = run.matching().get();
         MorseComplex morse = run.morseComplex().orElseGet(() -> everyCellCritical(complex));
@@ -67,13 +68,21 @@ public final class RepresentativeCycles {
         }
         CycleShortening shortening = new CycleShortening(complex,
                 ring.ring() == Coefficients.Ring.PRIME_FIELD ? ring.prime() : 0);
-        certificates = certificates.stream().map(shortening::shorten).toList();
+        certificates = shortening.shortenAll(certificates);
         CycleVerifier.verify(complex, ring, run.homology(), certificates);
         List<Cycle> cycles = new ArrayList<>();
         for (Certificate c : certificates) {
             cycles.add(toCycle(complex, c, ring));
         }
         return List.copyOf(cycles);
+    }
+
+    private static void requireFewCritical(Computation run) {
+        if (run.totalCritical() > MAX_CRITICAL) {
+            throw new InputException(run.source(), InputException.NO_LINE, String.format(Locale.ROOT,
+                    "representative cycles are found on at most %,d critical cells, and this matching leaves %,d;"
+                            + " another --matching may leave fewer", MAX_CRITICAL, run.totalCritical()));
+        }
     }
 
     /** Each generator of the Morse complex lifted to the complex, with its preimage and cocycle lifted too. */

@@ -58,6 +58,19 @@ public final class RepresentativeCycles {
                     + " complex, and this run built none (a coefficient left the range of a long)");
         }
         requireFewCritical(run);
+        List<Certificate> certificates = certificates(run);
+        ChainComplex complex = run.complex().get();
+        Coefficients ring = run.coefficients();
+        CycleVerifier.verify(complex, ring, run.homology(), certificates);
+        List<Cycle> cycles = new ArrayList<>();
+        for (Certificate c : certificates) {
+            cycles.add(toCycle(complex, c, ring));
+        }
+        return List.copyOf(cycles);
+    }
+
+    /** The certificates of a stored run, lifted and shortened, before the verifier has seen them. */
+    static List<Certificate> certificates(Computation run) {
         ChainComplex complex = run.complex().get();
         Matching matching = run.matching().get();
         MorseComplex morse = run.morseComplex().orElseGet(() -> everyCellCritical(complex));
@@ -68,13 +81,7 @@ public final class RepresentativeCycles {
         }
         CycleShortening shortening = new CycleShortening(complex,
                 ring.ring() == Coefficients.Ring.PRIME_FIELD ? ring.prime() : 0);
-        certificates = shortening.shortenAll(certificates);
-        CycleVerifier.verify(complex, ring, run.homology(), certificates);
-        List<Cycle> cycles = new ArrayList<>();
-        for (Certificate c : certificates) {
-            cycles.add(toCycle(complex, c, ring));
-        }
-        return List.copyOf(cycles);
+        return shortening.shortenAll(certificates);
     }
 
     private static void requireFewCritical(Computation run) {

@@ -39,7 +39,9 @@ import java.util.List;
  * modulo p over Z/p) and a nonsingular pairing matrix prove the classes independent, and as many as
  * the printed Betti number they are a basis.
  *
- * <p>For reduced homology the 0-cycles must also have coefficient sum zero. Any failure is an
+ * <p>In dimension 0 the components, found here by union-find over the edges, certify H_0 instead
+ * of cocycles (the cocycle of a component is as large as the component). For reduced homology the
+ * 0-cycles must also have coefficient sum zero. Any failure is an
  * {@link IllegalStateException} naming the check; no cycle is then printed.
  */
 final class CycleVerifier {
@@ -107,6 +109,10 @@ final class CycleVerifier {
             requireZero(difference, BigInteger.ZERO, "t·z is not the boundary of the chain given for a torsion "
                     + d + "-cycle of order " + c.order());
         }
+        if (d == 0) {
+            requireComponentBasis(free, reducedZero);
+            return;
+        }
         for (Certificate c : here) {
             requireZero(coboundaryOf(c.cocycle(), d), c.order(), "the cochain certifying a " + d + "-cycle is not a cocycle");
         }
@@ -119,6 +125,78 @@ final class CycleVerifier {
                 }
             }
         }
+    }
+
+    /**
+     * H_0 is free on the components (found here by union-find over the edges): the 0-cycles are a
+     * basis when the matrix of their coefficient sums per component is unimodular (over a field:
+     * nonsingular). In reduced homology the cycles lie in the kernel of the augmentation, a direct
+     * summand of rank one less; they are a basis of it when, with one vertex added, they are a basis of
+     * the whole: if k = Σ a_i z_i + b v has augmentation 0 then b = 0.
+     */
+    private void requireComponentBasis(List<Certificate> free, boolean reduced) {
+        int first = complex.firstCell(0);
+        int vertices = complex.cellCount(0);
+        int[] parent = new int[vertices];
+        for (int v = 0; v < vertices; v++) {
+            parent[v] = v;
+        }
+        int firstEdge = complex.firstCell(1);
+        for (int e = firstEdge; e < firstEdge + complex.cellCount(1); e++) {
+            int root = -1;
+            for (int i = boundary.start(e); i < boundary.end(e); i++) {
+                int r = find(parent, boundary.target(i) - first);
+                if (root < 0) {
+                    root = r;
+                } else if (r != root) {
+                    parent[r] = root;
+                }
+            }
+        }
+        int[] component = new int[vertices];
+        java.util.Arrays.fill(component, -1);
+        int components = 0;
+        for (int v = 0; v < vertices; v++) {
+            int r = find(parent, v);
+            if (component[r] < 0) {
+                component[r] = components++;
+            }
+        }
+        int columns = free.size() + (reduced && components > 0 ? 1 : 0);
+        if (columns != components) {
+            fail("H_0 has " + components + " components but " + free.size() + " cycles were found");
+        }
+        BigInteger[][] m = new BigInteger[components][columns];
+        for (BigInteger[] row : m) {
+            java.util.Arrays.fill(row, BigInteger.ZERO);
+        }
+        for (int j = 0; j < free.size(); j++) {
+            for (Int2ObjectMap.Entry<BigInteger> e : free.get(j).chain().int2ObjectEntrySet()) {
+                int row = component[find(parent, e.getIntKey() - first)];
+                m[row][j] = m[row][j].add(e.getValue());
+            }
+        }
+        if (columns > free.size()) {
+            m[0][columns - 1] = BigInteger.ONE; // a vertex of the first component
+        }
+        for (BigInteger[] row : m) {
+            for (int j = 0; j < columns; j++) {
+                row[j] = reduce(row[j], prime);
+            }
+        }
+        BigInteger det = determinant(m, prime);
+        boolean ok = ring.ring() == Coefficients.Ring.INTEGERS ? det.abs().equals(BigInteger.ONE) : det.signum() != 0;
+        if (!ok) {
+            fail("the 0-cycles are not a basis of the components (determinant " + det + ")");
+        }
+    }
+
+    private static int find(int[] parent, int v) {
+        while (parent[v] != v) {
+            parent[v] = parent[parent[v]];
+            v = parent[v];
+        }
+        return v;
     }
 
     /** The pairing of the free cycles with their cocycles: determinant ±1 over Z, nonzero over Q, nonzero mod p. */
@@ -148,6 +226,10 @@ final class CycleVerifier {
     /** The determinant by fraction-free elimination (Bareiss 1968), modulo {@code modulus} when it is positive. */
     static BigInteger determinant(BigInteger[][] a, BigInteger modulus) {
         int n = a.length;
+        BigInteger signed = signedPermutation(a, modulus);
+        if (signed != null) {
+            return signed;
+        }
         BigInteger[][] m = new BigInteger[n][];
         for (int i = 0; i < n; i++) {
             m[i] = a[i].clone();
@@ -204,6 +286,50 @@ final class CycleVerifier {
             previous = m[c][c];
         }
         return n == 0 ? BigInteger.ONE : sign > 0 ? m[n - 1][n - 1] : m[n - 1][n - 1].negate();
+    }
+
+    /**
+     * The determinant when every row has one nonzero entry, ±1, in distinct columns (the common case,
+     * checked in quadratic time): the sign of the permutation times the entries; else null.
+     */
+    private static BigInteger signedPermutation(BigInteger[][] a, BigInteger modulus) {
+        int n = a.length;
+        int[] column = new int[n];
+        boolean[] used = new boolean[n];
+        BigInteger det = BigInteger.ONE;
+        for (int i = 0; i < n; i++) {
+            column[i] = -1;
+            for (int j = 0; j < n; j++) {
+                if (reduce(a[i][j], modulus).signum() != 0) {
+                    BigInteger v = modulus.signum() > 0 ? a[i][j].mod(modulus) : a[i][j];
+                    boolean unit = v.abs().equals(BigInteger.ONE)
+                            || modulus.signum() > 0 && v.equals(modulus.subtract(BigInteger.ONE));
+                    if (column[i] >= 0 || used[j] || !unit) {
+                        return null;
+                    }
+                    column[i] = j;
+                    used[j] = true;
+                    det = det.multiply(v.abs().equals(BigInteger.ONE) ? v : BigInteger.ONE.negate());
+                }
+            }
+            if (column[i] < 0) {
+                return BigInteger.ZERO;
+            }
+        }
+        boolean[] seen = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            if (!seen[i]) {
+                int length = 0;
+                for (int j = i; !seen[j]; j = column[j]) {
+                    seen[j] = true;
+                    length++;
+                }
+                if (length % 2 == 0) {
+                    det = det.negate();
+                }
+            }
+        }
+        return reduce(det, modulus);
     }
 
     private static BigInteger pair(Int2ObjectOpenHashMap<BigInteger> cochain, Int2ObjectOpenHashMap<BigInteger> chain) {

@@ -110,7 +110,8 @@ public final class RepresentativeCycles {
             }
             BigInteger modulus = ring.ring() == Coefficients.Ring.PRIME_FIELD ? BigInteger.valueOf(ring.prime())
                     : g.order();
-            Int2ObjectOpenHashMap<BigInteger> cocycle = coflow.lift(critical, g.cocycle(), d, modulus);
+            Int2ObjectOpenHashMap<BigInteger> cocycle = d == 0 ? new Int2ObjectOpenHashMap<>() // components certify H_0
+                    : coflow.lift(critical, g.cocycle(), d, modulus);
             certificates.add(new Certificate(d, g.order(), chain, preimage, cocycle, nonzero(chain, ring)));
         }
         return certificates;

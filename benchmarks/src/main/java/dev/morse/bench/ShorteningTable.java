@@ -20,7 +20,8 @@ import java.util.stream.Stream;
  * run, as {@code morse homology --cycles} does it) and a total row. Inputs the cycles refuse (too
  * many critical cells) are listed as refused.
  *
- * <p>Arguments: the corpus directory (default {@code corpus}).
+ * <p>Arguments: the corpus directory (default {@code corpus}) and optionally a matching name
+ * (default: the default run's).
  */
 public final class ShorteningTable {
     private ShorteningTable() {
@@ -34,11 +35,12 @@ public final class ShorteningTable {
             files = list.filter(f -> f.toString().endsWith(".poset") || f.toString().endsWith(".simplicial")).sorted()
                     .toList();
         }
+        Request request = args.length > 1 ? Request.defaults().withMatching(args[1], 1L, 1) : Request.defaults();
         long lifted = 0;
         long shortened = 0;
         int inputs = 0;
         for (Path file : files) {
-            Computation run = Engines.compute(InputReaders.read(file), Request.defaults());
+            Computation run = Engines.compute(InputReaders.read(file), request);
             List<Cycle> cycles;
             try {
                 cycles = RepresentativeCycles.of(run);

@@ -100,7 +100,7 @@ final class CycleShortening {
                     free.add(i);
                 }
             }
-            if (free.size() > 1 && free.size() <= BASIS_LIMIT && d < complex.dimension()) {
+            if (free.size() > 1 && free.size() <= BASIS_LIMIT) {
                 shortenBasis(out, free);
             }
         }

@@ -12,7 +12,8 @@ import java.util.List;
 
 /**
  * Checks representative cycles on the complex itself, with nothing of the reduction that found them:
- * only the complex's boundary, its own transpose of it, and exact arithmetic written here. It checks
+ * only the complex's boundary (its coboundary serves only to find the cells above a cochain's
+ * support; each value φ(∂c) is summed from the boundary of c) and exact arithmetic written here. It checks
  * certificates (McConnell, Mehlhorn, Näher and Schweitzer, "Certifying algorithms", Computer
  * Science Review 5, 2011), so every check is a sparse product and the cost grows with the size of
  * the cycles and cocycles, not with a decomposition of the complex.
@@ -49,13 +50,14 @@ final class CycleVerifier {
     private final Coefficients ring;
     private final BigInteger prime;
     private final Boundary boundary;
-    private final java.util.Map<Integer, Cofaces> cofaces = new java.util.HashMap<>();
+    private final Boundary cofaces;
 
     private CycleVerifier(ChainComplex complex, Coefficients ring) {
         this.complex = complex;
         this.ring = ring;
         this.prime = ring.ring() == Coefficients.Ring.PRIME_FIELD ? BigInteger.valueOf(ring.prime()) : BigInteger.ZERO;
         this.boundary = complex.boundary();
+        this.cofaces = complex.coboundary();
     }
 
     /**
@@ -357,52 +359,29 @@ final class CycleVerifier {
         return faces;
     }
 
-    /** φ(∂c) for every (d+1)-cell c with a face in the support of φ. */
+    /** φ(∂c) for every (d+1)-cell c with a face in the support of φ, found through the complex's coboundary. */
     private Int2ObjectOpenHashMap<BigInteger> coboundaryOf(Int2ObjectOpenHashMap<BigInteger> cochain, int d) {
         Int2ObjectOpenHashMap<BigInteger> values = new Int2ObjectOpenHashMap<>();
         if (d >= complex.dimension()) {
             return values;
         }
-        Cofaces up = cofaces.computeIfAbsent(d, this::transposeAbove);
-        int first = complex.firstCell(d);
         for (Int2ObjectMap.Entry<BigInteger> e : cochain.int2ObjectEntrySet()) {
-            int row = e.getIntKey() - first;
-            for (int i = up.offsets[row]; i < up.offsets[row + 1]; i++) {
-                values.merge(up.cells[i], e.getValue().multiply(BigInteger.valueOf(up.signs[i])), BigInteger::add);
+            int cell = e.getIntKey();
+            for (int i = cofaces.start(cell); i < cofaces.end(cell); i++) {
+                int c = cofaces.target(i);
+                if (!values.containsKey(c)) {
+                    BigInteger v = BigInteger.ZERO;
+                    for (int j = boundary.start(c); j < boundary.end(c); j++) {
+                        BigInteger phi = cochain.get(boundary.target(j));
+                        if (phi != null) {
+                            v = v.add(phi.multiply(BigInteger.valueOf(boundary.coefficient(j))));
+                        }
+                    }
+                    values.put(c, v);
+                }
             }
         }
         return values;
-    }
-
-    /** The verifier's own transpose of the boundary from dimension d + 1 to d. */
-    private Cofaces transposeAbove(int d) {
-        int first = complex.firstCell(d);
-        int count = complex.cellCount(d);
-        int firstAbove = complex.firstCell(d + 1);
-        int countAbove = complex.cellCount(d + 1);
-        int[] offsets = new int[count + 1];
-        for (int c = firstAbove; c < firstAbove + countAbove; c++) {
-            for (int i = boundary.start(c); i < boundary.end(c); i++) {
-                offsets[boundary.target(i) - first + 1]++;
-            }
-        }
-        for (int r = 0; r < count; r++) {
-            offsets[r + 1] += offsets[r];
-        }
-        int[] fill = offsets.clone();
-        int[] cells = new int[offsets[count]];
-        int[] signs = new int[offsets[count]];
-        for (int c = firstAbove; c < firstAbove + countAbove; c++) {
-            for (int i = boundary.start(c); i < boundary.end(c); i++) {
-                int at = fill[boundary.target(i) - first]++;
-                cells[at] = c;
-                signs[at] = boundary.coefficient(i);
-            }
-        }
-        return new Cofaces(offsets, cells, signs);
-    }
-
-    private record Cofaces(int[] offsets, int[] cells, int[] signs) {
     }
 
     /** Every value zero modulo {@code modulus} (exactly when 0), and modulo p over Z/p. */

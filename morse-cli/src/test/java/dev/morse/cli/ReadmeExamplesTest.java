@@ -39,6 +39,8 @@ class ReadmeExamplesTest {
         assertEquals(List.of(2L), CliFiles.torsion(rp2, 1));
         // a ring of pixels is an annulus: Z, Z, 0
         assertEquals(List.of(1L, 1L, 0L), CliFiles.betti(json("ring.pbm")));
+        // a block with two holes retracts onto a wedge of two circles: Z, Z^2, 0 (common practice)
+        assertEquals(List.of(1L, 2L, 0L), CliFiles.betti(json("two-holes.pbm")));
     }
 
     @Test

@@ -11,8 +11,9 @@ import java.util.Objects;
  * @param dimension the dimension of its cells
  * @param order 0 for a free generator, else the torsion factor t of the group it generates
  * @param terms its nonzero terms, by ascending cell
+ * @param liftedTerms the number of terms it had when first lifted, before it was shortened
  */
-public record Cycle(int dimension, BigInteger order, List<Term> terms) {
+public record Cycle(int dimension, BigInteger order, List<Term> terms, int liftedTerms) {
     /**
      * One term: a coefficient and a cell, the cell named as the input names it.
      *
@@ -27,6 +28,11 @@ public record Cycle(int dimension, BigInteger order, List<Term> terms) {
             label = List.copyOf(label);
             Objects.requireNonNull(coefficient, "coefficient");
         }
+    }
+
+    /** A cycle that was not shortened. */
+    public Cycle(int dimension, BigInteger order, List<Term> terms) {
+        this(dimension, order, terms, terms.size());
     }
 
     /** Copies and validates. */

@@ -18,14 +18,30 @@ import java.util.List;
  * Over Z/p also the torsion generators of order divisible by p, and for each torsion generator z
  * of H_(d-1) of order t with p | t, the chain y with {@code ∂y = t z}, a cycle modulo p (the
  * universal coefficient theorem).
+ *
+ * <p>Beside each generator comes a cocycle that certifies it (the certificates of a certifying
+ * algorithm: McConnell, Mehlhorn, Näher and Schweitzer, "Certifying algorithms", Computer Science
+ * Review 5, 2011): row i of {@code P} applied to the kernel coordinates ({@code V⁻¹ x}, its last k
+ * entries) is a linear form ψ_i with {@code ψ_i(z_j) = δ_ij}, and {@code ψ_i ∂_(d+1) = e_i (Q⁻¹)_i},
+ * so ψ_i is a cocycle over Z for a free generator and modulo t for one of order t. For a generator
+ * y of H_d(Z/p) that comes from torsion of order t in dimension d − 1, {@code ψ ∘ ∂_d / t} is an
+ * integer cocycle taking the value 1 on y. Torsion generators over Z also carry their preimage:
+ * {@code ∂_(d+1) y = t z}.
  */
 final class MorseGenerators {
-    /** One generator: its order (0 when free) and its coefficients over the critical cells. */
-    record Generator(int dimension, BigInteger order, BigInteger[] coefficients) {
+    /**
+     * One generator: its order (0 when free) and its coefficients over the critical cells of its
+     * dimension; a cocycle over the same cells taking the value 1 on it and 0 on the other generators
+     * of its dimension (modulo the order for a torsion generator), and for a torsion generator over Z
+     * its preimage over the critical cells of the dimension above (else {@code null}).
+     */
+    record Generator(int dimension, BigInteger order, BigInteger[] coefficients, BigInteger[] cocycle,
+            BigInteger[] preimage) {
     }
 
     /** The per-dimension decomposition kept for the next dimension's Tor part. */
-    private record Cycles(BigInteger[][] generators, BigInteger[] orders, BigInteger[][] preimages) {
+    private record Cycles(BigInteger[][] generators, BigInteger[] orders, BigInteger[][] preimages,
+            BigInteger[][] cocycles) {
     }
 
     private MorseGenerators() {
@@ -46,9 +62,9 @@ final class MorseGenerators {
             for (int i = 0; i < here.orders().length; i++) {
                 BigInteger t = here.orders()[i];
                 if (t.signum() == 0) {
-                    free.add(new Generator(d, BigInteger.ZERO, here.generators()[i]));
+                    free.add(new Generator(d, BigInteger.ZERO, here.generators()[i], here.cocycles()[i], null));
                 } else if (!t.equals(BigInteger.ONE)) {
-                    torsion.add(new Generator(d, t, here.generators()[i]));
+                    torsion.add(new Generator(d, t, here.generators()[i], here.cocycles()[i], here.preimages()[i]));
                 }
             }
             all.addAll(free);
@@ -59,14 +75,15 @@ final class MorseGenerators {
                     BigInteger p = BigInteger.valueOf(coefficients.prime());
                     for (Generator g : torsion) {
                         if (g.order().mod(p).signum() == 0) {
-                            all.add(new Generator(d, BigInteger.ZERO, g.coefficients()));
+                            all.add(new Generator(d, BigInteger.ZERO, g.coefficients(), g.cocycle(), null));
                         }
                     }
                     if (below != null) {
                         for (int i = 0; i < below.orders().length; i++) {
                             BigInteger t = below.orders()[i];
                             if (t.signum() > 0 && !t.equals(BigInteger.ONE) && t.mod(p).signum() == 0) {
-                                all.add(new Generator(d, BigInteger.ZERO, below.preimages()[i]));
+                                all.add(new Generator(d, BigInteger.ZERO, below.preimages()[i],
+                                        bocksteinCocycle(morse, d, below.cocycles()[i], t), null));
                             }
                         }
                     }
@@ -104,7 +121,23 @@ final class MorseGenerators {
         BigInteger[][] generators = new BigInteger[k][];
         BigInteger[] orders = new BigInteger[k];
         BigInteger[][] preimages = new BigInteger[k][];
+        BigInteger[][] cocycles = new BigInteger[k][];
+        BigInteger[][] kernelForms = new BigInteger[k][];
+        for (int j = 0; j < k; j++) {
+            kernelForms[j] = a.vInverseRow(a.rank() + j);
+        }
         for (int i = 0; i < k; i++) {
+            BigInteger[] row = s.uRow(i);
+            BigInteger[] psi = new BigInteger[n];
+            java.util.Arrays.fill(psi, BigInteger.ZERO);
+            for (int j = 0; j < k; j++) {
+                if (row[j].signum() != 0) {
+                    for (int c = 0; c < n; c++) {
+                        psi[c] = psi[c].add(row[j].multiply(kernelForms[j][c]));
+                    }
+                }
+            }
+            cocycles[i] = psi;
             BigInteger[] combination = s.uInverseColumn(i);
             BigInteger[] z = new BigInteger[n];
             for (int r = 0; r < n; r++) {
@@ -120,7 +153,25 @@ final class MorseGenerators {
             orders[i] = i < s.rank() ? s.diagonal(i) : BigInteger.ZERO;
             preimages[i] = i < s.rank() ? s.vColumn(i) : null; // ∂_(d+1) of it is orders[i]·z
         }
-        return new Cycles(generators, orders, preimages);
+        return new Cycles(generators, orders, preimages, cocycles);
+    }
+
+    /** {@code ψ ∘ ∂_d / t} over the critical cells of dimension d, for ψ a cocycle modulo t in dimension d − 1. */
+    private static BigInteger[] bocksteinCocycle(MorseComplex morse, int d, BigInteger[] psi, BigInteger t) {
+        SparseIntegerMatrix b = morse.boundary(d);
+        BigInteger[] eta = new BigInteger[morse.cellCount(d)];
+        for (int j = 0; j < eta.length; j++) {
+            BigInteger sum = BigInteger.ZERO;
+            for (int i = b.start(j); i < b.end(j); i++) {
+                sum = sum.add(psi[b.row(i)].multiply(BigInteger.valueOf(b.value(i))));
+            }
+            BigInteger[] qr = sum.divideAndRemainder(t);
+            if (qr[1].signum() != 0) {
+                throw new IllegalStateException("a torsion cocycle of the Morse complex is not a cocycle modulo its order");
+            }
+            eta[j] = qr[0];
+        }
+        return eta;
     }
 
     private static BigInteger[][] dense(SparseIntegerMatrix m, int rows, int columns) {

@@ -82,6 +82,16 @@ public final class SmithTransforms {
         return column(uInverse, j);
     }
 
+    /** Row {@code i} of {@code U}. A copy. */
+    public BigInteger[] uRow(int i) {
+        return u[i].clone();
+    }
+
+    /** Row {@code i} of {@code V⁻¹}. A copy. */
+    public BigInteger[] vInverseRow(int i) {
+        return vInverse[i].clone();
+    }
+
     /** {@code V⁻¹ x} for a vector {@code x} of length columns. */
     public BigInteger[] vInverseTimes(BigInteger[] x) {
         return times(vInverse, x);

@@ -24,6 +24,11 @@ public final class CriticalChainNames {
         }
     }
 
+    /** The critical chains themselves, in internal ids. */
+    CriticalChains chains() {
+        return chains;
+    }
+
     /** The names of the critical chains of dimension {@code d}, in the order of the Morse complex. */
     public List<String> names(int d) {
         int count = chains.count(d);

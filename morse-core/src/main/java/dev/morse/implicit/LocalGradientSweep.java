@@ -91,6 +91,54 @@ final class LocalGradientSweep {
                 anyBig ? bigList.toArray(new BigInteger[0]) : null);
     }
 
+    /**
+     * The lift {@code g(x)} of a chain x of critical chains of dimension d (each {@code d + 1}
+     * internal ids ascending, with its coefficient) along the gradient flow: x plus the chains of
+     * dimension d matched downward whose boundaries cancel every face of {@code ∂x} matched upward,
+     * the faces settled in the topological order of one flow reached from all of {@code ∂x} (the
+     * sweep above, for a sum of chains at once). Exact BigInteger coefficients; the same limit on the
+     * chains visited.
+     *
+     * @return the chains of the lift, each {@code d + 1} ids, and their nonzero coefficients, in step
+     */
+    LiftedChain lift(List<int[]> chains, List<BigInteger> coefficients, int d) {
+        ChainTable lifted = new ChainTable(d + 1);
+        List<BigInteger> values = new ArrayList<>();
+        for (int k = 0; k < chains.size(); k++) {
+            int at = lifted.add(chains.get(k));
+            while (values.size() <= at) {
+                values.add(BigInteger.ZERO);
+            }
+            values.set(at, values.get(at).add(coefficients.get(k)));
+        }
+        if (d > 0) {
+            Flow flow = new Flow(d);
+            int[] face = new int[d];
+            for (int[] sigma : chains) {
+                for (int k = 0; k <= d; k++) {
+                    remove(sigma, d + 1, k, face);
+                    flow.reach(face);
+                }
+            }
+            flow.liftInto(chains, coefficients, lifted, values);
+        }
+        List<int[]> out = new ArrayList<>();
+        List<BigInteger> outValues = new ArrayList<>();
+        for (int i = 0; i < values.size(); i++) {
+            if (values.get(i).signum() != 0) {
+                int[] chain = new int[d + 1];
+                lifted.copy(i, chain);
+                out.add(chain);
+                outValues.add(values.get(i));
+            }
+        }
+        return new LiftedChain(out, outValues);
+    }
+
+    /** A chain of Δ(P) given by its chains (internal ids) and their coefficients, in step. */
+    record LiftedChain(List<int[]> chains, List<BigInteger> coefficients) {
+    }
+
     /** The faces reachable from {@code ∂σ} and the flow between them, in a topological order. */
     private Flow collect(int[] sigma, int d) {
         Flow flow = new Flow(d);
@@ -253,6 +301,39 @@ final class LocalGradientSweep {
                 values[u] = BigInteger.valueOf(a[u]);
             }
             return column(values, rowIndex);
+        }
+
+        /** Sweeps {@code ∂x} and adds each partner used, with its coefficient, to {@code lifted}. */
+        void liftInto(List<int[]> chains, List<BigInteger> coefficients, ChainTable lifted, List<BigInteger> values) {
+            BigInteger[] a = new BigInteger[faces.size()];
+            Arrays.fill(a, BigInteger.ZERO);
+            int[] face = new int[width];
+            for (int c = 0; c < chains.size(); c++) {
+                for (int k = 0; k <= width; k++) {
+                    remove(chains.get(c), width + 1, k, face);
+                    int u = faces.find(face);
+                    a[u] = (k & 1) == 0 ? a[u].add(coefficients.get(c)) : a[u].subtract(coefficients.get(c));
+                }
+            }
+            for (int i = order.size() - 1; i >= 0; i--) {
+                int u = order.getInt(i);
+                if (partner.getInt(u) < 0 || a[u].signum() == 0) {
+                    continue;
+                }
+                BigInteger factor = (insertAt.getInt(u) & 1) == 0 ? a[u].negate() : a[u];
+                partnerOf(u, nu);
+                int at = lifted.add(nu);
+                while (values.size() <= at) {
+                    values.add(BigInteger.ZERO);
+                }
+                values.set(at, values.get(at).add(factor));
+                int start = edgeStart.getInt(u);
+                for (int e = 0; e < width; e++) {
+                    int v = edgeTarget.getInt(start + e);
+                    a[v] = edgeSign.getInt(start + e) > 0 ? a[v].add(factor) : a[v].subtract(factor);
+                }
+                a[u] = BigInteger.ZERO;
+            }
         }
 
         Column sweepInBigInteger(int[] sigma, ChainTable rowIndex) {

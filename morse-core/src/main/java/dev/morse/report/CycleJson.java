@@ -8,7 +8,8 @@ import java.util.List;
 /**
  * The {@code "cycles"} field of a homology report, in the contract of the design: per cycle its
  * {@code dimension}, {@code order} (0 when free) and {@code terms}, each a {@code coefficient} and
- * the {@code cell} in the input's labels (a list of labels, or of {@code [low, high]} pairs for a cube).
+ * the {@code cell} in the input's labels (a list of labels, or of {@code [low, high]} pairs for a cube),
+ * and {@code terms_before_shortening}, the number of terms the cycle had when first lifted.
  */
 final class CycleJson {
     private CycleJson() {
@@ -29,6 +30,7 @@ final class CycleJson {
                 json.writeEndObject();
             }
             json.writeEndArray();
+            json.writeNumberField("terms_before_shortening", c.liftedTerms());
             json.writeEndObject();
         }
         json.writeEndArray();

@@ -50,6 +50,9 @@ public final class TextReportWriter {
             more.append(String.format(Locale.ROOT, "    %s%d %s: %s\n", prefix, c.dimension(),
                     c.order().signum() == 0 ? "free" : "order " + c.order(), cycleSum(report.complexKind(), c)));
         }
+        more.append(String.format(Locale.ROOT, "    %,d terms in all, %,d before shortening by boundaries\n",
+                cycles.stream().mapToLong(c -> c.terms().size()).sum(),
+                cycles.stream().mapToLong(Cycle::liftedTerms).sum()));
         return more.toString();
     }
 

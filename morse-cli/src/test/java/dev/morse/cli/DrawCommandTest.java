@@ -158,6 +158,19 @@ class DrawCommandTest {
     }
 
     @Test
+    void cyclesOfTheImplicitEngineAreMarkedOnItsChains() throws Exception {
+        // the implicit engine's chains have no stored ids: the marked nodes are found by the chains'
+        // names. The circle's one generator is a sum of chains whose elements go once round it, and
+        // its nodes are the 1-chains of the order complex (common practice: H_1 of a circle is Z)
+        String file = Inputs.write(dir, "circle.poset", "morse-poset 1\nab: a b\nbc: b c\ncd: c d\nda: d a\n");
+        Path svg = dir.resolve("implicit.svg");
+        CliRun run = CliRun.morse("draw", file, "--complex", "implicit", "--cycles", "-o", svg.toString());
+        assertEquals(0, run.code(), run.err());
+        assertTrue(run.out().contains("cycle: generator 1 of 1 of H_1, free, 8 terms"), run.out());
+        assertEquals(8, count(parse(Files.readAllBytes(svg)), "circle", "cycle"));
+    }
+
+    @Test
     void anImageWithCyclesIsDrawnWithEachHoleGoneRound() throws Exception {
         // a 5 x 3 bitmap with two single-pixel holes: H_1 = Z^2
         String image = Inputs.write(dir, "holes.pbm", "P1\n5 3\n1 1 1 1 1\n1 0 1 0 1\n1 1 1 1 1\n");

@@ -24,6 +24,7 @@ import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.stream.Collectors;
 
 /**
  * Hasse diagram pictures of one input, at most {@link HasseDrawing#MAX_NODES} nodes: the face poset
@@ -93,12 +94,25 @@ public final class HasseDrawings {
         return choice == null ? drawing : withCellCycle(drawing, run, choice);
     }
 
-    /** The cells of the chosen cycle, each with its coefficient: node ids are cell ids. */
+    /**
+     * The cells of the chosen cycle, each with its coefficient: node ids are cell ids, except on the
+     * implicit engine, whose chains have no ids and are found by their names, {@code a<b<c}.
+     */
     private static HasseDrawing withCellCycle(HasseDrawing drawing, Computation run, CycleChoice choice) {
         CycleChoice.Chosen chosen = choice.pick(RepresentativeCycles.of(run), run.source());
         List<String> coefficients = new ArrayList<>(Collections.nCopies(drawing.nodeCount(), (String) null));
+        Map<String, Integer> byName = new HashMap<>();
         for (Cycle.Term t : chosen.cycle().terms()) {
-            coefficients.set(t.cell(), t.coefficient().toString());
+            int node = t.cell();
+            if (node < 0) {
+                if (byName.isEmpty()) {
+                    for (int v = 0; v < drawing.nodeCount(); v++) {
+                        byName.put(drawing.label(v), v);
+                    }
+                }
+                node = byName.get(t.label().stream().map(String::valueOf).collect(Collectors.joining("<")));
+            }
+            coefficients.set(node, t.coefficient().toString());
         }
         return drawing.withCycle(new HasseDrawing.CycleMark(chosen.description(), coefficients,
                 new boolean[drawing.coverCount()]));

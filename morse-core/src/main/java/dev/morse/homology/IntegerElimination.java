@@ -4,7 +4,6 @@ import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.function.IntConsumer;
 
 /**
  * Sparse elimination of an integer matrix, in exact arithmetic, in one of four modes that share
@@ -283,7 +282,14 @@ final class IntegerElimination extends SparseElimination {
 
     private void eliminateWithUnit(int r, int c, int position) {
         long unit = rowBig[r] != null ? rowBig[r][position].longValue() : rowValues[r][position];
-        clearPivotColumn(r, c, i -> {
+        int n = columnLength(c);
+        pivotColumnRows = rowsOf(c, pivotColumnRows);
+        beginRetiring(c);
+        for (int t = 0; t < n; t++) {
+            int i = pivotColumnRows[t];
+            if (i == r) {
+                continue;
+            }
             int at = position(i, c);
             // Row i minus (a / unit) times row r, and 1 / unit = unit.
             if (rowBig[i] == null) {
@@ -292,23 +298,7 @@ final class IntegerElimination extends SparseElimination {
                 BigInteger a = rowBig[i][at];
                 combine(first, i, BigInteger.ONE, r, unit == 1 ? a.negate() : a);
             }
-        });
-    }
-
-    /**
-     * Clears column {@code c} outside the pivot row {@code r}: {@code intoFirst} writes the new row
-     * i into the scratch {@code first}, which is then committed; finally the pivot retires.
-     */
-    private void clearPivotColumn(int r, int c, IntConsumer intoFirst) {
-        int n = columnLength(c);
-        pivotColumnRows = rowsOf(c, pivotColumnRows);
-        beginRetiring(c);
-        for (int t = 0; t < n; t++) {
-            int i = pivotColumnRows[t];
-            if (i != r) {
-                intoFirst.accept(i);
-                commit(i, first);
-            }
+            commit(i, first);
         }
         retirePivot(r, c);
     }
@@ -367,7 +357,14 @@ final class IntegerElimination extends SparseElimination {
 
     private void eliminateScaled(int r, int c) {
         BigInteger p = value(r, position(r, c));
-        clearPivotColumn(r, c, i -> {
+        int n = columnLength(c);
+        pivotColumnRows = rowsOf(c, pivotColumnRows);
+        beginRetiring(c);
+        for (int t = 0; t < n; t++) {
+            int i = pivotColumnRows[t];
+            if (i == r) {
+                continue;
+            }
             BigInteger a = value(i, position(i, c));
             BigInteger g = a.gcd(p);
             BigInteger multiplier = p.divide(g);
@@ -375,7 +372,9 @@ final class IntegerElimination extends SparseElimination {
             if (scaleNumerator != null) {
                 rescale(i, multiplier, BigInteger.ONE);
             }
-        });
+            commit(i, first);
+        }
+        retirePivot(r, c);
     }
 
     /** The pivot of least absolute value, then least Markowitz cost, in the sparsest parked lines. */

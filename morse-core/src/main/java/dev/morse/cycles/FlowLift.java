@@ -4,7 +4,6 @@ import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
 import dev.morse.matching.Matching;
 import it.unimi.dsi.fastutil.ints.Int2ObjectOpenHashMap;
-import it.unimi.dsi.fastutil.ints.IntArrayFIFOQueue;
 import it.unimi.dsi.fastutil.ints.IntHeapPriorityQueue;
 import it.unimi.dsi.fastutil.ints.IntOpenHashSet;
 import java.math.BigInteger;
@@ -22,7 +21,7 @@ final class FlowLift {
     private final ChainComplex complex;
     private final Matching matching;
     private final Boundary boundary;
-    private final java.util.Map<Integer, Order> orders = new java.util.HashMap<>();
+    private final java.util.Map<Integer, FlowOrder> orders = new java.util.HashMap<>();
 
     FlowLift(ChainComplex complex, Matching matching) {
         this.complex = complex;
@@ -40,15 +39,15 @@ final class FlowLift {
         for (var e : chain.int2ObjectEntrySet()) {
             addBoundary(faces, e.getIntKey(), e.getValue());
         }
-        Order order = orders.computeIfAbsent(d - 1, this::flowOrder);
+        FlowOrder order = orders.computeIfAbsent(d - 1, k -> FlowOrder.of(complex, matching, k, true));
         // only the faces reached are visited, in the order of the flow: a heap of their places in it
         IntHeapPriorityQueue pending = new IntHeapPriorityQueue();
         IntOpenHashSet queued = new IntOpenHashSet();
         for (int tau : faces.keySet()) {
-            enqueue(order, tau, pending, queued);
+            order.enqueue(tau, pending, queued);
         }
         while (!pending.isEmpty()) {
-            int tau = order.cells[pending.dequeueInt()];
+            int tau = order.cells()[pending.dequeueInt()];
             BigInteger a = faces.get(tau);
             if (a == null || a.signum() == 0) {
                 continue;
@@ -59,22 +58,11 @@ final class FlowLift {
             lifted.merge(nu, b, BigInteger::add);
             addBoundary(faces, nu, b);
             for (int i = boundary.start(nu); i < boundary.end(nu); i++) {
-                enqueue(order, boundary.target(i), pending, queued);
+                order.enqueue(boundary.target(i), pending, queued);
             }
         }
         lifted.int2ObjectEntrySet().removeIf(e -> e.getValue().signum() == 0);
         return lifted;
-    }
-
-    private void enqueue(Order order, int cell, IntHeapPriorityQueue pending, IntOpenHashSet queued) {
-        int at = order.place[cell - order.first];
-        if (at >= 0 && queued.add(cell)) {
-            pending.enqueue(at);
-        }
-    }
-
-    /** The cells matched upward in flow order, and the place of each cell of the dimension in it (-1 if none). */
-    private record Order(int first, int[] cells, int[] place) {
     }
 
     private void addBoundary(Int2ObjectOpenHashMap<BigInteger> faces, int cell, BigInteger factor) {
@@ -82,63 +70,5 @@ final class FlowLift {
             faces.merge(boundary.target(i), factor.multiply(BigInteger.valueOf(boundary.coefficient(i))),
                     BigInteger::add);
         }
-    }
-
-    /**
-     * The cells of dimension {@code d} matched upward, each before every such face of its partner
-     * (Kahn's algorithm on the gradient paths, acyclic by the matching's verification).
-     */
-    private Order flowOrder(int d) {
-        int first = complex.firstCell(d);
-        int count = complex.cellCount(d);
-        int[] indegree = new int[count];
-        for (int t = first; t < first + count; t++) {
-            if (isMatchedUp(t)) {
-                int nu = matching.mate(t);
-                for (int i = boundary.start(nu); i < boundary.end(nu); i++) {
-                    int f = boundary.target(i);
-                    if (f != t && isMatchedUp(f)) {
-                        indegree[f - first]++;
-                    }
-                }
-            }
-        }
-        IntArrayFIFOQueue ready = new IntArrayFIFOQueue();
-        int matched = 0;
-        for (int t = first; t < first + count; t++) {
-            if (isMatchedUp(t)) {
-                matched++;
-                if (indegree[t - first] == 0) {
-                    ready.enqueue(t);
-                }
-            }
-        }
-        int[] order = new int[matched];
-        int k = 0;
-        while (!ready.isEmpty()) {
-            int t = ready.dequeueInt();
-            order[k++] = t;
-            int nu = matching.mate(t);
-            for (int i = boundary.start(nu); i < boundary.end(nu); i++) {
-                int f = boundary.target(i);
-                if (f != t && isMatchedUp(f) && --indegree[f - first] == 0) {
-                    ready.enqueue(f);
-                }
-            }
-        }
-        if (k != matched) {
-            throw new IllegalStateException("the gradient flow has a closed path: the matching is not acyclic");
-        }
-        int[] place = new int[count];
-        java.util.Arrays.fill(place, -1);
-        for (int i = 0; i < order.length; i++) {
-            place[order[i] - first] = i;
-        }
-        return new Order(first, order, place);
-    }
-
-    private boolean isMatchedUp(int cell) {
-        int mate = matching.mate(cell);
-        return mate != Matching.CRITICAL && complex.dimensionOf(mate) == complex.dimensionOf(cell) + 1;
     }
 }

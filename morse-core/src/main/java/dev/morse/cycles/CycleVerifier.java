@@ -239,17 +239,11 @@ final class CycleVerifier {
         if (modulus.signum() > 0) {
             BigInteger det = BigInteger.ONE;
             for (int c = 0; c < n; c++) {
-                int r = c;
-                while (r < n && m[r][c].mod(modulus).signum() == 0) {
-                    r++;
-                }
-                if (r == n) {
+                int swapped = pivotToDiagonal(m, c, modulus);
+                if (swapped < 0) {
                     return BigInteger.ZERO;
                 }
-                if (r != c) {
-                    BigInteger[] t = m[r];
-                    m[r] = m[c];
-                    m[c] = t;
+                if (swapped > 0) {
                     det = det.negate();
                 }
                 BigInteger inverse = m[c][c].modInverse(modulus);
@@ -266,17 +260,11 @@ final class CycleVerifier {
         BigInteger previous = BigInteger.ONE;
         int sign = 1;
         for (int c = 0; c < n; c++) {
-            int r = c;
-            while (r < n && m[r][c].signum() == 0) {
-                r++;
-            }
-            if (r == n) {
+            int swapped = pivotToDiagonal(m, c, modulus);
+            if (swapped < 0) {
                 return BigInteger.ZERO;
             }
-            if (r != c) {
-                BigInteger[] t = m[r];
-                m[r] = m[c];
-                m[c] = t;
+            if (swapped > 0) {
                 sign = -sign;
             }
             for (int i = c + 1; i < n; i++) {
@@ -288,6 +276,28 @@ final class CycleVerifier {
             previous = m[c][c];
         }
         return n == 0 ? BigInteger.ONE : sign > 0 ? m[n - 1][n - 1] : m[n - 1][n - 1].negate();
+    }
+
+    /**
+     * Brings a row with a nonzero entry in column {@code c} (modulo {@code modulus} when it is
+     * positive), at or below row c, to row c: returns 0 when row c had one, 1 after a swap, and -1
+     * when there is none, so the determinant is 0.
+     */
+    private static int pivotToDiagonal(BigInteger[][] m, int c, BigInteger modulus) {
+        int r = c;
+        while (r < m.length && (modulus.signum() > 0 ? m[r][c].mod(modulus) : m[r][c]).signum() == 0) {
+            r++;
+        }
+        if (r == m.length) {
+            return -1;
+        }
+        if (r == c) {
+            return 0;
+        }
+        BigInteger[] t = m[r];
+        m[r] = m[c];
+        m[c] = t;
+        return 1;
     }
 
     /**

@@ -165,6 +165,19 @@ class NewInputsCommandTest {
     }
 
     @Test
+    void aGraphmlFileWithADocumentTypeIsRefusedBeforeItsEntitiesAreRead() throws IOException {
+        // an external entity would make the XML parser read another file (the XXE attack, common
+        // practice to refuse); GraphML has no document type, so any is refused, on its line
+        String bad = Inputs.write(dir, "entity.graphml", "<?xml version=\"1.0\"?>\n"
+                + "<!DOCTYPE graphml [<!ENTITY secret SYSTEM \"file:///etc/hostname\">]>\n"
+                + "<graphml xmlns=\"http://graphml.graphdrawing.org/xmlns\"><graph edgedefault=\"undirected\">"
+                + "<node id=\"a\"><data key=\"d0\">&secret;</data></node><node id=\"b\"/>"
+                + "<edge source=\"a\" target=\"b\"/></graph></graphml>\n");
+        assertBadInput(bad + ":2: a document type declaration (<!DOCTYPE ...>) is not read: GraphML needs none, and"
+                + " its entities could reach other files", "homology", bad);
+    }
+
+    @Test
     void aDotSyntaxErrorIsOneLineWithItsLine() throws IOException {
         String bad = Inputs.write(dir, "bad.dot", "graph G {\n  a -- b;\n  b -- ;\n}\n");
         CliRun run = CliRun.morse("homology", bad);

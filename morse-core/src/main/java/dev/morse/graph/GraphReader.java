@@ -42,10 +42,40 @@ public final class GraphReader {
 
     /** Reads a GraphML file; the XML is not checked against the GraphML schema, only parsed. */
     public static Graph readGraphml(Path file) throws IOException {
+        refuseDocumentType(file);
         GraphMLImporter<String, DefaultEdge> importer = new GraphMLImporter<>();
         importer.setSchemaValidation(false);
         importer.setVertexFactory(id -> id);
         return imported(file, false, importer);
+    }
+
+    /**
+     * Refuses a document type declaration before the root element: GraphML needs none, and the XML
+     * parser inside the importer would resolve its external entities, reading other files or
+     * addresses named there (common practice: such entities are the XXE attack, and the safe reader
+     * of untrusted XML refuses them).
+     */
+    private static void refuseDocumentType(Path file) throws IOException {
+        try (BufferedReader reader = TextFiles.utf8(file)) {
+            StringBuilder prolog = new StringBuilder();
+            char[] buffer = new char[8192];
+            int read;
+            while ((read = reader.read(buffer)) > 0) {
+                prolog.append(buffer, 0, read);
+                int root = prolog.indexOf("<graphml");
+                int declaration = prolog.indexOf("<!DOCTYPE");
+                if (declaration >= 0 && (root < 0 || declaration < root)) {
+                    int line = 1 + (int) prolog.substring(0, declaration).chars().filter(c -> c == '\n').count();
+                    throw new InputException(file.toString(), line, "a document type declaration (<!DOCTYPE ...>) is"
+                            + " not read: GraphML needs none, and its entities could reach other files");
+                }
+                if (root >= 0) {
+                    return;
+                }
+            }
+        } catch (java.nio.charset.CharacterCodingException e) {
+            throw new InputException(file.toString(), InputException.NO_LINE, "not valid UTF-8 text");
+        }
     }
 
     /** Reads {@code file} into a graph of that kind with {@code importer}, every failure one line. */

@@ -3,16 +3,10 @@ package dev.morse.report;
 import com.fasterxml.jackson.core.JsonGenerator;
 import dev.morse.inspect.PosetSummary;
 import dev.morse.inspect.ChainComplexSummary;
-import dev.morse.inspect.ImageInspector;
 import dev.morse.inspect.ImageSummary;
-import dev.morse.inspect.PosetInspector;
-import dev.morse.inspect.SimplicialInspector;
+import dev.morse.inspect.Inspections;
 import dev.morse.inspect.SimplicialSummary;
-import dev.morse.input.ChainComplexInput;
-import dev.morse.input.FacetInput;
 import dev.morse.input.Input;
-import dev.morse.input.PosetInput;
-import dev.morse.input.VoxelInput;
 import java.io.IOException;
 
 /**
@@ -85,16 +79,8 @@ public final class InspectionJsonWriter {
 
     /** The summary of any input as indented JSON ending with a newline. */
     public static String toJson(Input input) {
-        if (input instanceof PosetInput poset) {
-            return toJson(input.source(), PosetInspector.inspect(poset.poset()));
-        }
-        if (input instanceof FacetInput facets) {
-            return toJson(input.source(), SimplicialInspector.inspect(facets.facets()));
-        }
-        if (input instanceof ChainComplexInput given) {
-            return toJson(input.source(), ChainComplexSummary.of(given.complex()));
-        }
-        return toJson(input.source(), ImageInspector.inspect(((VoxelInput) input).image()));
+        return Inspections.show(input, InspectionJsonWriter::toJson, InspectionJsonWriter::toJson,
+                InspectionJsonWriter::toJson, InspectionJsonWriter::toJson);
     }
 
     /** The summary of a chain complex given by its boundary matrices as indented JSON ending with a newline. */

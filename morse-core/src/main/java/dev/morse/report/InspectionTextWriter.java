@@ -2,16 +2,10 @@ package dev.morse.report;
 
 import dev.morse.inspect.PosetSummary;
 import dev.morse.inspect.ChainComplexSummary;
-import dev.morse.inspect.ImageInspector;
 import dev.morse.inspect.ImageSummary;
-import dev.morse.inspect.PosetInspector;
-import dev.morse.inspect.SimplicialInspector;
+import dev.morse.inspect.Inspections;
 import dev.morse.inspect.SimplicialSummary;
-import dev.morse.input.ChainComplexInput;
-import dev.morse.input.FacetInput;
 import dev.morse.input.Input;
-import dev.morse.input.PosetInput;
-import dev.morse.input.VoxelInput;
 import java.math.BigInteger;
 import java.util.List;
 import java.util.Locale;
@@ -84,16 +78,8 @@ public final class InspectionTextWriter {
 
     /** The summary of any input, as lines of text. */
     public static String toText(Input input) {
-        if (input instanceof PosetInput poset) {
-            return toText(input.source(), PosetInspector.inspect(poset.poset()));
-        }
-        if (input instanceof FacetInput facets) {
-            return toText(input.source(), SimplicialInspector.inspect(facets.facets()));
-        }
-        if (input instanceof ChainComplexInput given) {
-            return toText(input.source(), ChainComplexSummary.of(given.complex()));
-        }
-        return toText(input.source(), ImageInspector.inspect(((VoxelInput) input).image()));
+        return Inspections.show(input, InspectionTextWriter::toText, InspectionTextWriter::toText,
+                InspectionTextWriter::toText, InspectionTextWriter::toText);
     }
 
     /** The summary of a chain complex given by its boundary matrices, as lines of text. */

@@ -8,7 +8,6 @@ import dev.morse.matching.MatchingHeuristics;
 import dev.morse.report.ComparisonChartSvg;
 import dev.morse.report.ComparisonJsonWriter;
 import dev.morse.report.ComparisonTextWriter;
-import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -80,9 +79,6 @@ final class CompareCommand implements Callable<Integer> {
         if (plot != null) {
             OutputFiles.write(plot, ComparisonChartSvg.toSvg(report));
         }
-        PrintWriter out = spec.commandLine().getOut();
-        out.print(text);
-        out.flush();
-        return 0;
+        return ReportOptions.print(spec, text);
     }
 }

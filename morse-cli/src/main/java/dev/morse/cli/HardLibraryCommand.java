@@ -6,7 +6,6 @@ import dev.morse.engine.Request;
 import dev.morse.generate.HardLibraryComparison;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.report.ComparisonSummaryWriter;
-import java.io.PrintWriter;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -55,9 +54,6 @@ final class HardLibraryCommand implements Callable<Integer> {
         List<ComparisonReport> reports = shown.around(spec,
                 () -> HardLibraryComparison.run(request, Optional.ofNullable(matchings)));
         String text = shown.json() ? ComparisonSummaryWriter.toJson(reports) : ComparisonSummaryWriter.toText(reports);
-        PrintWriter out = spec.commandLine().getOut();
-        out.print(text);
-        out.flush();
-        return 0;
+        return ReportOptions.print(spec, text);
     }
 }

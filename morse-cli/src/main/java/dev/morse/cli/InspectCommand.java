@@ -4,7 +4,6 @@ import dev.morse.input.Input;
 import dev.morse.io.InputException;
 import dev.morse.report.InspectionJsonWriter;
 import dev.morse.report.InspectionTextWriter;
-import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -43,9 +42,6 @@ final class InspectCommand implements Callable<Integer> {
                 throw new InputException(read.source(), InputException.NO_LINE, "too large to compute: " + e.getMessage());
             }
         });
-        PrintWriter out = spec.commandLine().getOut();
-        out.print(text);
-        out.flush();
-        return 0;
+        return ReportOptions.print(spec, text);
     }
 }

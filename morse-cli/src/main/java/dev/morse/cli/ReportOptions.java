@@ -1,5 +1,6 @@
 package dev.morse.cli;
 
+import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -15,6 +16,14 @@ final class ReportOptions {
     /** Whether JSON was asked for. */
     boolean json() {
         return output.json();
+    }
+
+    /** Prints {@code text} on standard output as it is and returns the exit code 0. */
+    static int print(CommandSpec spec, String text) {
+        PrintWriter out = spec.commandLine().getOut();
+        out.print(text);
+        out.flush();
+        return 0;
     }
 
     /** Runs {@code work} with the progress line, unless {@code --quiet}. */

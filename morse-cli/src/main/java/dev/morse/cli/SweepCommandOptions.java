@@ -9,7 +9,6 @@ import dev.morse.interval.SweepReport;
 import dev.morse.report.IntervalJsonWriter;
 import dev.morse.report.IntervalTextWriter;
 import java.io.IOException;
-import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Mixin;
@@ -74,9 +73,6 @@ final class SweepCommandOptions {
         if (jsonl != null) {
             OutputFiles.write(jsonl, IntervalJsonWriter.toJsonLines(report));
         }
-        PrintWriter out = spec.commandLine().getOut();
-        out.print(text);
-        out.flush();
-        return 0;
+        return ReportOptions.print(spec, text);
     }
 }

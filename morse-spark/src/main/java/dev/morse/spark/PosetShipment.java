@@ -9,20 +9,15 @@ import java.util.Arrays;
 /**
  * A poset in the few arrays it takes to send it to other machines: its labels, by id, and its covers
  * as two parallel arrays. {@link #rebuild()} gives back a poset with the same ids, so that the ids in
- * the intervals sent with it mean the same elements there as here.
+ * the intervals sent with it mean the same elements there as here. The arrays are the shipment's
+ * own, not copied: read them, do not change them.
+ *
+ * @param labels the label of each element, by id
+ * @param coverLowers the lower end of each cover
+ * @param coverUppers the upper end of each cover, parallel to {@code coverLowers}
  */
-public final class PosetShipment implements Serializable {
+public record PosetShipment(String[] labels, int[] coverLowers, int[] coverUppers) implements Serializable {
     private static final long serialVersionUID = 1L;
-
-    private final String[] labels;
-    private final int[] coverLowers;
-    private final int[] coverUppers;
-
-    private PosetShipment(String[] labels, int[] coverLowers, int[] coverUppers) {
-        this.labels = labels;
-        this.coverLowers = coverLowers;
-        this.coverUppers = coverUppers;
-    }
 
     /** The shipment of {@code poset}. */
     public static PosetShipment of(Poset poset) {

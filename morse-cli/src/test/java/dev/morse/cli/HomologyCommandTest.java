@@ -37,24 +37,6 @@ class HomologyCommandTest {
     private static final String CIRCLE = "morse-poset 1\nv1\nv2\ne1: v1 v2\ne2: v1 v2\n";
     /** One edge with both ends at one vertex: a loop as a CW complex, but not a regular one. */
     private static final String LOOP = "morse-poset 1\nv\ne: v\n";
-    /**
-     * The 6-vertex triangulation of RP^2 (classical; REFERENCES.md). The facet list is from memory;
-     * {@link #rp2IsAClosedSurfaceOfEulerCharacteristicOne} checks it independently.
-     */
-    private static final String RP2 = """
-            morse-simplicial 1
-            1 2 3
-            1 3 4
-            1 4 5
-            1 5 6
-            1 2 6
-            2 3 5
-            3 4 6
-            4 5 2
-            5 6 3
-            6 2 4
-            """;
-
     @TempDir
     static Path dir;
     private static String square;
@@ -67,7 +49,7 @@ class HomologyCommandTest {
         square = write("square.poset", SQUARE);
         circle = write("circle.poset", CIRCLE);
         loop = write("loop.poset", LOOP);
-        rp2 = write("rp2.simplicial", RP2);
+        rp2 = write("rp2.simplicial", Inputs.RP2);
     }
 
     private static String write(String name, String text) throws IOException {
@@ -331,7 +313,7 @@ class HomologyCommandTest {
     void rp2IsAClosedSurfaceOfEulerCharacteristicOne() {
         // By the classification of closed surfaces, a connected closed surface with χ = 1 is RP^2.
         // Closed surface: every edge in exactly two triangles, every vertex link a single cycle.
-        List<int[]> triangles = RP2.lines().skip(1).map(l -> Arrays.stream(l.split(" "))
+        List<int[]> triangles = Inputs.RP2.lines().skip(1).map(l -> Arrays.stream(l.split(" "))
                 .mapToInt(Integer::parseInt).toArray()).toList();
         Map<String, Integer> edgeUse = new HashMap<>();
         for (int[] t : triangles) {

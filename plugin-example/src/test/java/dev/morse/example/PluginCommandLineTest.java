@@ -5,6 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import dev.morse.cli.MorseCommand;
+import dev.morse.generate.Triangulations;
+import dev.morse.io.SimplicialWriter;
 import java.io.File;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -23,20 +25,8 @@ import picocli.CommandLine;
  * {@code --matching lower-star}, verifies its matching and gets the right homology.
  */
 class PluginCommandLineTest {
-    /** The 6-vertex RP^2 (REFERENCES.md): H_0 = Z, H_1 = Z/2, H_2 = 0. */
-    private static final String RP2 = """
-            morse-simplicial 1
-            1 2 3
-            1 3 4
-            1 4 5
-            1 5 6
-            1 2 6
-            2 3 5
-            3 4 6
-            4 5 2
-            5 6 3
-            6 2 4
-            """;
+    /** The 6-vertex RP^2 (REFERENCES.md): H_0 = Z, H_1 = Z/2, H_2 = 0; the library's own triangulation. */
+    private static final String RP2 = SimplicialWriter.toText(Triangulations.projectivePlane6());
 
     @TempDir
     Path dir;

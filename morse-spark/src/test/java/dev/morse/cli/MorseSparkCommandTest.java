@@ -3,6 +3,7 @@ package dev.morse.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.morse.spark.SparkFixtures;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
@@ -29,19 +30,10 @@ class MorseSparkCommandTest {
         return new Run(code, out.toString(), err.toString());
     }
 
-    private static Path corpus() {
-        return Path.of(System.getProperty("morse.corpus", "../corpus"));
-    }
-
-    private static String withoutTimings(String text) {
-        return text.replaceAll("\"timings_ms\":\\{[^}]*\\},?", "").replaceAll("\"ms\":[0-9.]+,?", "")
-                .replace(",}", "}");
-    }
-
     @Test
     void intervalsPrintTheObjectOfTheSingleMachineCommand(@TempDir Path dir) throws Exception {
         // the real projective plane: over Z its torsion makes (0^, 1^) the witness (Hatcher, Example 2.42)
-        String file = corpus().resolve("rp-2.poset").toString();
+        String file = SparkFixtures.corpus().resolve("rp-2.poset").toString();
         Path linesHere = dir.resolve("here.jsonl");
         Path linesThere = dir.resolve("there.jsonl");
         Run here = run(MorseCommand.newCommandLine(), "intervals", file, "--json", "--coefficients", "Z", "--mobius",
@@ -62,15 +54,15 @@ class MorseSparkCommandTest {
     void batchPrintsTheLinesOfTheSingleMachineCommand(@TempDir Path dir) throws Exception {
         Path bad = dir.resolve("bad.poset");
         Files.writeString(bad, "not a header\n", StandardCharsets.UTF_8);
-        List<String> args = List.of("batch", corpus().resolve("loop.poset").toString(), bad.toString(),
-                corpus().resolve("torus-7.simplicial").toString(), "--cohen-macaulay");
+        List<String> args = List.of("batch", SparkFixtures.corpus().resolve("loop.poset").toString(), bad.toString(),
+                SparkFixtures.corpus().resolve("torus-7.simplicial").toString(), "--cohen-macaulay");
         Run here = run(MorseCommand.newCommandLine(), args.toArray(String[]::new));
         Run there = run(MorseSparkCommand.newCommandLine(),
                 java.util.stream.Stream.concat(args.stream(), java.util.stream.Stream.of("--master", "local[2]"))
                         .toArray(String[]::new));
         assertEquals(2, here.code());
         assertEquals(2, there.code(), there.err());
-        assertEquals(withoutTimings(here.out()), withoutTimings(there.out()));
+        assertEquals(SparkFixtures.withoutTimings(here.out()), SparkFixtures.withoutTimings(there.out()));
         String[] lines = there.out().split("\n");
         assertEquals(3, lines.length);
         assertEquals("{\"input\":\"" + bad + "\",\"error\":\"" + bad

@@ -8,15 +8,12 @@ import dev.morse.batch.BatchOptions;
 import dev.morse.batch.BatchRun;
 import dev.morse.engine.Request;
 import dev.morse.input.ReadOptions;
-import dev.morse.image.ImageOptions;
 import dev.morse.report.BatchJsonWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
-import java.util.OptionalInt;
 import org.apache.spark.api.java.JavaSparkContext;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
@@ -37,32 +34,21 @@ class SparkBatchTest {
         spark.close();
     }
 
-    private static Path corpus() {
-        return Path.of(System.getProperty("morse.corpus", "../corpus"));
-    }
-
-    /** A JSON line without its timings, which differ from run to run. */
-    static String withoutTimings(String line) {
-        return line.replaceAll("\"timings_ms\":\\{[^}]*\\},?", "").replaceAll("\"ms\":[0-9.]+,?", "")
-                .replace(",}", "}");
-    }
-
     private static List<String> lines(List<BatchItem> items, Request request, boolean cohenMacaulay, boolean onSpark) {
         List<String> out = new ArrayList<>();
         if (onSpark) {
             SparkBatch.run(spark, items, request, ReadOptions.DEFAULT_GRAPH_COMPLEX, cohenMacaulay,
-                    line -> out.add(withoutTimings(line)));
+                    line -> out.add(SparkFixtures.withoutTimings(line)));
         } else {
-            BatchOptions options = new BatchOptions(request, ReadOptions.of(new ImageOptions(OptionalInt.empty(), false,
-                    Optional.empty())), 1, cohenMacaulay);
-            BatchRun.run(items, options, o -> BatchJsonWriter.toJsonLine(o, cohenMacaulay), line -> out.add(withoutTimings(line)));
+            BatchOptions options = new BatchOptions(request, ReadOptions.defaults(), 1, cohenMacaulay);
+            BatchRun.run(items, options, o -> BatchJsonWriter.toJsonLine(o, cohenMacaulay), line -> out.add(SparkFixtures.withoutTimings(line)));
         }
         return out;
     }
 
     @Test
     void theCorpusGivesTheLinesOfTheBatchOnOneMachine() {
-        List<BatchItem> items = BatchRun.items(List.of(corpus()));
+        List<BatchItem> items = BatchRun.items(List.of(SparkFixtures.corpus()));
         Request request = Request.defaults();
         List<String> there = lines(items, request, false, true);
         assertEquals(lines(items, request, false, false), there);
@@ -74,7 +60,7 @@ class SparkBatchTest {
     void aBadInputIsItsOwnLineAndTheBatchGoesOn(@TempDir Path dir) throws Exception {
         Path cycle = dir.resolve("cycle.poset");
         Files.writeString(cycle, "morse-poset 1\na: b\nb: a\n", StandardCharsets.UTF_8);
-        Path loop = corpus().resolve("loop.poset");
+        Path loop = SparkFixtures.corpus().resolve("loop.poset");
         List<BatchItem> items = List.of(new BatchItem(0, loop.toString()), new BatchItem(1, cycle.toString()),
                 new BatchItem(2, dir.resolve("missing.poset").toString()), new BatchItem(3, loop.toString()));
         List<String> there = new ArrayList<>();
@@ -85,7 +71,7 @@ class SparkBatchTest {
         assertEquals("{\"input\":\"" + cycle + "\",\"error\":\"" + cycle
                 + ":3: the relations contain a cycle of 2 elements: b < a < b\"}\n", there.get(1));
         assertEquals(lines(items, Request.defaults(), false, false),
-                there.stream().map(SparkBatchTest::withoutTimings).toList());
+                there.stream().map(SparkFixtures::withoutTimings).toList());
         assertTrue(there.get(0).startsWith("{\"input\":\"" + loop + "\",\"format\":\"poset\""), there.get(0));
     }
 }

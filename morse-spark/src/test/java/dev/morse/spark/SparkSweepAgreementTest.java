@@ -22,7 +22,6 @@ import dev.morse.interval.SweepOptions;
 import dev.morse.interval.SweepReport;
 import dev.morse.poset.Poset;
 import dev.morse.report.IntervalJsonWriter;
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.spark.api.java.JavaSparkContext;
@@ -48,10 +47,6 @@ class SparkSweepAgreementTest {
         spark.close();
     }
 
-    private static Path corpus() {
-        return Path.of(System.getProperty("morse.corpus", "../corpus"));
-    }
-
     /** Asserts that both paths give the same report, interval by interval, and returns the number of intervals. */
     private static long assertSameSweep(Poset poset, String name, SweepOptions options, int blockSize) {
         PosetWithBounds hat = PosetWithBounds.of(poset);
@@ -75,11 +70,11 @@ class SparkSweepAgreementTest {
     @Test
     void everyCorpusCaseGivesTheSameIntervalsAndVerdicts() throws Exception {
         List<String> swept = new ArrayList<>();
-        for (CorpusCase c : CorpusManifest.readDirectory(corpus())) {
+        for (CorpusCase c : CorpusManifest.readDirectory(SparkFixtures.corpus())) {
             if (c.heavy()) {
                 continue;
             }
-            Input input = InputReaders.read(corpus().resolve(c.file()));
+            Input input = InputReaders.read(SparkFixtures.corpus().resolve(c.file()));
             Poset poset = SweepInputs.posetOf(input);
             // integers, so that torsion (the projective planes) must agree too
             SweepOptions options = new SweepOptions(Request.defaults().withHomology(Coefficients.INTEGERS, true), 1, false);
@@ -114,7 +109,7 @@ class SparkSweepAgreementTest {
     void firstFailureStopsAtTheSameWitness() throws Exception {
         // three disjoint edges (the matching complex M_4) are not Cohen–Macaulay: disconnected in dimension 1,
         // H~_0 = Z^2 below the top dimension (Reisner 1976; the corpus manifest gives H_0 = Z^3)
-        Poset p = SweepInputs.posetOf(InputReaders.read(corpus().resolve("matching-4.simplicial")));
+        Poset p = SweepInputs.posetOf(InputReaders.read(SparkFixtures.corpus().resolve("matching-4.simplicial")));
         SweepOptions options = new SweepOptions(Request.defaults(), 1, true);
         assertSameSweep(p, "matching-4", options, 2);
         SparkSweep.Outcome there = SparkSweep.run(spark, PosetWithBounds.of(p), "matching-4", options, 2);

@@ -77,7 +77,7 @@ public class HeuristicBenchmark {
             cells = ComplexPolicy.storedComplex(MorseTable.block(side).toPoset(), choice);
         } else {
             cells = ComplexPolicy.plan(InputReaders.read(Path.of(input)), Request.defaults().withComplex(choice)
-                    .withPosetReduction(false).withImplicit(ElementOrder.DOWN_SETS, 1L << 60)).stored().orElseThrow();
+                    .withPosetReduction(false).withImplicit(ElementOrder.DOWN_SETS, Request.MAX_STORED_CHAIN_LIMIT)).stored().orElseThrow();
         }
     }
 

@@ -10,8 +10,6 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Optional;
-import java.util.OptionalInt;
 import java.util.function.Consumer;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -55,7 +53,7 @@ final class BatchCommandOptions {
 
     /** How every input is read: images as given, graphs as {@code --graph-as} says. */
     ReadOptions readOptions() {
-        return new ReadOptions(new ImageOptions(OptionalInt.empty(), false, Optional.empty()),
+        return new ReadOptions(ImageOptions.defaults(),
                 graphAs == null ? ReadOptions.DEFAULT_GRAPH_COMPLEX : graphAs);
     }
 

@@ -88,7 +88,7 @@ public final class ComplexPolicy {
      */
     public static ChainComplex storedComplex(Poset poset, ComplexChoice choice) {
         Request request = Request.defaults().withComplex(choice).withPosetReduction(false)
-                .withImplicit(Request.defaults().elementOrder(), 1L << 60);
+                .withImplicit(Request.defaults().elementOrder(), Request.MAX_STORED_CHAIN_LIMIT);
         return plan(new PosetInput("poset", poset, 0), request).stored().orElseThrow(() -> new IllegalArgumentException(
                 "the implicit order complex stores no cells; the implicit engine computes its homology"));
     }

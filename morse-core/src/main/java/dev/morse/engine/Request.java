@@ -46,6 +46,9 @@ public record Request(ComplexChoice complex, Coefficients coefficients, boolean 
      */
     public static final long DEFAULT_STORED_CHAIN_LIMIT = 1_000_000;
 
+    /** The largest stored chain limit, 2^60: "store the order complex whatever its number of chains". */
+    public static final long MAX_STORED_CHAIN_LIMIT = 1L << 60;
+
     /**
      * The most seeded trials one request may ask for. Each trial is a whole matching of the complex,
      * so a million already means hours on anything but a toy; more is a typing slip, refused rather
@@ -67,7 +70,7 @@ public record Request(ComplexChoice complex, Coefficients coefficients, boolean 
         if (trials < 1 || trials > MAX_TRIALS) {
             throw new IllegalArgumentException("trials must be in 1.." + MAX_TRIALS + ", got " + trials);
         }
-        if (storedChainLimit < 0 || storedChainLimit > 1L << 60) {
+        if (storedChainLimit < 0 || storedChainLimit > MAX_STORED_CHAIN_LIMIT) {
             throw new IllegalArgumentException("the stored chain limit must lie in 0..2^60");
         }
         if (maxStoredCells < 1) {

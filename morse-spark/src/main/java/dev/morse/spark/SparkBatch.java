@@ -13,8 +13,6 @@ import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Optional;
-import java.util.OptionalInt;
 import java.util.function.Consumer;
 import org.apache.spark.api.java.JavaSparkContext;
 
@@ -63,8 +61,7 @@ public final class SparkBatch {
 
     /** One input on an executor: the same options as {@code morse batch} gives, one thread per task. */
     static Line computeOne(BatchItem item, Request request, GraphComplex graphAs, boolean cohenMacaulay) {
-        BatchOptions options = new BatchOptions(request, new ReadOptions(new ImageOptions(OptionalInt.empty(), false,
-                Optional.empty()), graphAs), 1, cohenMacaulay);
+        BatchOptions options = new BatchOptions(request, new ReadOptions(ImageOptions.defaults(), graphAs), 1, cohenMacaulay);
         BatchOutcome outcome;
         try {
             outcome = BatchRun.compute(item, options);

@@ -56,7 +56,7 @@ public final class GraphReader {
      * of untrusted XML refuses them).
      */
     private static void refuseDocumentType(Path file) throws IOException {
-        try (BufferedReader reader = TextFiles.utf8(file)) {
+        TextFiles.read(file, (reader, source) -> {
             StringBuilder prolog = new StringBuilder();
             char[] buffer = new char[8192];
             int read;
@@ -66,16 +66,15 @@ public final class GraphReader {
                 int declaration = prolog.indexOf("<!DOCTYPE");
                 if (declaration >= 0 && (root < 0 || declaration < root)) {
                     int line = 1 + (int) prolog.substring(0, declaration).chars().filter(c -> c == '\n').count();
-                    throw new InputException(file.toString(), line, "a document type declaration (<!DOCTYPE ...>) is"
-                            + " not read: GraphML needs none, and its entities could reach other files");
+                    throw new InputException(source, line, "a document type declaration (<!DOCTYPE ...>) is not read:"
+                            + " GraphML needs none, and its entities could reach other files");
                 }
                 if (root >= 0) {
-                    return;
+                    break;
                 }
             }
-        } catch (java.nio.charset.CharacterCodingException e) {
-            throw new InputException(file.toString(), InputException.NO_LINE, "not valid UTF-8 text");
-        }
+            return null;
+        });
     }
 
     /** Reads {@code file} into a graph of that kind with {@code importer}, every failure one line. */

@@ -44,9 +44,8 @@ public final class IntervalSweep {
     public static SweepReport run(PosetWithBounds hat, String source, SweepOptions options) {
         long[] order = sweepOrder(hat);
         IntervalResult[] results = new IntervalResult[order.length];
-        MobiusTable[] mobiusHolder = new MobiusTable[1];
-        int swept = solveAll(hat, source, options, order, results, () -> mobiusHolder[0] = MobiusTable.of(hat));
-        return report(hat, source, options, order, Arrays.asList(results).subList(0, swept), mobiusHolder[0]);
+        Swept swept = solveAll(hat, source, options, order, results);
+        return report(hat, source, options, order, Arrays.asList(results).subList(0, swept.count()), swept.mobius());
     }
 
     /**
@@ -145,10 +144,10 @@ public final class IntervalSweep {
 
     /**
      * Solves intervals until all are done or, with firstFailure, in order until the first failure, and
-     * runs {@code alongside} on the same threads; returns how many of the first intervals are done.
+     * computes the Möbius table of {@code hat} on the same threads.
      */
-    private static int solveAll(PosetWithBounds hat, String source, SweepOptions options, long[] order,
-            IntervalResult[] results, Runnable alongside) {
+    private static Swept solveAll(PosetWithBounds hat, String source, SweepOptions options, long[] order,
+            IntervalResult[] results) {
         AtomicInteger next = new AtomicInteger();
         AtomicInteger cutoff = new AtomicInteger(order.length);
         AtomicLong done = new AtomicLong();
@@ -162,10 +161,10 @@ public final class IntervalSweep {
             return t;
         });
         try {
+            // the Möbius table goes first: with several threads it overlaps the sweep, with one it runs
+            // before it, so the work is the same whatever the number of threads
+            Future<MobiusTable> mobius = pool.submit(() -> MobiusTable.of(hat));
             List<Future<?>> workers = new ArrayList<>();
-            // the one job besides the intervals goes first: with several threads it overlaps the sweep,
-            // with one it runs before it, so the work is the same whatever the number of threads
-            workers.add(pool.submit(alongside));
             for (int w = 0; w < threads; w++) {
                 workers.add(pool.submit(() -> {
                     IntervalSolver solver = new IntervalSolver(hat, options.request(), source);
@@ -195,10 +194,15 @@ public final class IntervalSweep {
             for (Future<?> worker : workers) {
                 Workers.await(worker, done::get, progress, () -> cutoff.set(-1), "sweeping intervals");
             }
+            MobiusTable table = Workers.await(mobius, done::get, progress, () -> cutoff.set(-1), "sweeping intervals");
+            progress.reached(done.get());
+            return new Swept(cutoff.get(), table);
         } finally {
             pool.shutdownNow();
         }
-        progress.reached(done.get());
-        return cutoff.get();
+    }
+
+    /** How many of the first intervals in the order were solved, and the Möbius table of P̂. */
+    private record Swept(int count, MobiusTable mobius) {
     }
 }

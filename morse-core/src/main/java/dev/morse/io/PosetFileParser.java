@@ -29,8 +29,13 @@ import java.util.Arrays;
  * then gives the same poset or the same one-line error as ever, with its line number. So errors
  * cost a second reading, and correct files never do.
  *
- * <p>Memory: the label bytes, 4 bytes per label for its offset and 16 to 32 for the table (8-byte
- * slots holding hash and id, at most half full), 8 bytes per listed relation, plus a buffer of {@value #BUFFER} bytes.
+ * <p>Each line is scanned once, byte by byte through a table of byte classes, and each label is
+ * looked up where the scan finds it. Lookups dominate: they are random accesses into a table too
+ * large for the caches, so the table holds short labels in its slots and a lookup touches nothing
+ * else.
+ *
+ * <p>Memory: the label bytes, 4 bytes per label for its offset and 26 to 52 for the table
+ * (16-byte slots, at most 5/8 full), 8 bytes per listed relation, plus a buffer of {@value #BUFFER} bytes.
  */
 final class PosetFileParser {
     static final int BUFFER = 1 << 20;
@@ -41,8 +46,8 @@ final class PosetFileParser {
     private int arenaSize;
     private int[] starts = new int[1 << 10];
     private int count;
-    /** Slots: the label's hash in the high half, its id + 1 in the low half; 0 when empty. */
-    private long[] table = new long[1 << 11];
+    /** The labels seen so far, in the format of {@link LabelSlots}. */
+    private long[] table = new long[2 << 11];
     private int[] lowers = new int[1 << 12];
     private int[] uppers = new int[1 << 12];
     private int relations;
@@ -235,51 +240,59 @@ final class PosetFileParser {
         }
     }
 
+    /** Byte classes of the one-pass scanner; a byte's class is {@code CLASS[b & 0xFF]}. */
+    private static final byte ORDINARY = 0;
+    private static final byte SPACE = 1;
+    private static final byte COLON = 2;
+    private static final byte COMMENT = 3;
+    private static final byte LINE_END = 4;
+    private static final byte FOREIGN = 5;
+    private static final byte[] CLASS = new byte[256];
+
+    static {
+        for (int c = 0; c < 256; c++) {
+            byte b = (byte) c;
+            CLASS[c] = b < 0 ? FOREIGN
+                    : b == '\n' || b == '\r' ? LINE_END
+                    : space(b) ? SPACE
+                    : b == ':' ? COLON
+                    : b == '#' ? COMMENT
+                    : ORDINARY;
+        }
+    }
+
     /**
      * Handles the complete lines in {@code b[0..filled)} and returns where the first incomplete one
      * starts; at the end of the input the last line is complete without a terminator. Lines end as
-     * {@link java.io.BufferedReader#readLine()} ends them: at \n, \r or \r\n.
+     * {@link java.io.BufferedReader#readLine()} ends them: at \n, \r or \r\n. A \r that ends the
+     * buffer is left for the next call, since the \n of a \r\n may follow.
      */
     private int lines(byte[] b, int filled, boolean end) throws GiveUp {
+        int limit = filled;
+        if (!end) {
+            limit = lastLineEnd(b, filled);
+            if (limit > 0 && b[limit - 1] == '\r') {
+                limit = lastLineEnd(b, limit - 1);
+            }
+        }
         int s = 0;
-        while (s < filled) {
-            int e = s;
-            int comment = -1;
-            while (e < filled) {
-                byte c = b[e];
-                if (c == '\n' || c == '\r') {
-                    break;
-                }
-                if (c < 0) {
-                    throw GIVE_UP;
-                }
-                if (c == '#' && comment < 0) {
-                    comment = e;
-                }
-                e++;
-            }
-            int next;
-            if (e == filled) {
-                if (!end) {
-                    return s;
-                }
-                next = filled;
-            } else if (b[e] == '\r') {
-                if (e + 1 == filled && !end) {
-                    return s; // a \n may follow in the next read
-                }
-                next = e + 1 < filled && b[e + 1] == '\n' ? e + 2 : e + 1;
-            } else {
-                next = e + 1;
-            }
-            lineNumber++;
-            line(b, s, comment >= 0 ? comment : e);
-            if ((lineNumber & PosetReader.REPORT_EVERY) == 0) {
+        while (s < limit) {
+            s = line(b, s, limit);
+            if ((++lineNumber & PosetReader.REPORT_EVERY) == 0) {
                 progress.reached(lineNumber);
             }
-            s = next;
         }
-        return s;
+        flush(b); // the queued labels point into b, which the caller is about to move
+        return limit;
+    }
+
+    /** Just after the last \n or \r in {@code b[0..to)}, or 0 if there is none. */
+    private static int lastLineEnd(byte[] b, int to) {
+        int i = to;
+        while (i > 0 && b[i - 1] != '\n' && b[i - 1] != '\r') {
+            i--;
+        }
+        return i;
     }
 
     /** ASCII white space in the sense of {@link Character#isWhitespace}, as the text reader splits. */
@@ -287,56 +300,96 @@ final class PosetFileParser {
         return c == ' ' || (c >= 9 && c <= 13) || (c >= 28 && c <= 31);
     }
 
-    private void line(byte[] b, int s, int e) throws GiveUp {
-        while (s < e && space(b[s])) {
-            s++;
+    /**
+     * Reads the line starting at {@code i} in one pass over its bytes, and returns where the next
+     * line starts. Gives up on everything the text reader would refuse or read differently: a
+     * second word before the colon, a colon among the lower labels, a label below itself, a line
+     * starting with a colon, and any byte outside ASCII, comments included.
+     */
+    private int line(byte[] b, int i, int limit) throws GiveUp {
+        byte[] classes = CLASS;
+        byte c = SPACE;
+        while (i < limit && (c = classes[b[i] & 0xFF]) == SPACE) {
+            i++;
         }
+        if (i == limit || c == LINE_END || c == COMMENT) {
+            return lineEnd(b, i, limit);
+        }
+        if (!headerSeen) {
+            return headerLine(b, i, limit);
+        }
+        if (c != ORDINARY) {
+            throw GIVE_UP;
+        }
+        int headStart = i;
+        while (i < limit && classes[b[i] & 0xFF] == ORDINARY) {
+            i++;
+        }
+        int headEnd = i;
+        queue(b, headStart, headEnd, true);
+        while (i < limit && (c = classes[b[i] & 0xFF]) == SPACE) {
+            i++;
+        }
+        if (i == limit || c == LINE_END || c == COMMENT) {
+            return lineEnd(b, i, limit);
+        }
+        if (c != COLON) {
+            throw GIVE_UP;
+        }
+        i++;
+        while (true) {
+            while (i < limit && (c = classes[b[i] & 0xFF]) == SPACE) {
+                i++;
+            }
+            if (i == limit || c == LINE_END || c == COMMENT) {
+                return lineEnd(b, i, limit);
+            }
+            if (c != ORDINARY) {
+                throw GIVE_UP;
+            }
+            int w = i;
+            while (i < limit && (c = classes[b[i] & 0xFF]) == ORDINARY) {
+                i++;
+            }
+            if (i - w == headEnd - headStart && Arrays.equals(b, w, i, b, headStart, headEnd)) {
+                throw GIVE_UP;
+            }
+            queue(b, w, i, false);
+        }
+    }
+
+    /**
+     * From {@code i}, which holds white space, a comment or the line's terminator, to the start of
+     * the next line; a comment's bytes must be ASCII too.
+     */
+    private static int lineEnd(byte[] b, int i, int limit) throws GiveUp {
+        while (i < limit && b[i] != '\n' && b[i] != '\r') {
+            if (b[i] < 0) {
+                throw GIVE_UP;
+            }
+            i++;
+        }
+        if (i == limit) {
+            return i;
+        }
+        return b[i] == '\r' && i + 1 < limit && b[i + 1] == '\n' ? i + 2 : i + 1;
+    }
+
+    /** The first line with content: it must be the header, a comment after it allowed. */
+    private int headerLine(byte[] b, int s, int limit) throws GiveUp {
+        int e = s;
+        while (e < limit && b[e] != '\n' && b[e] != '\r' && b[e] != '#') {
+            if (b[e] < 0) {
+                throw GIVE_UP;
+            }
+            e++;
+        }
+        int next = lineEnd(b, e, limit);
         while (e > s && space(b[e - 1])) {
             e--;
         }
-        if (s == e) {
-            return;
-        }
-        if (!headerSeen) {
-            header(b, s, e);
-            return;
-        }
-        int colon = s;
-        while (colon < e && b[colon] != ':') {
-            colon++;
-        }
-        int headEnd = colon;
-        while (headEnd > s && space(b[headEnd - 1])) {
-            headEnd--;
-        }
-        if (headEnd == s) {
-            throw GIVE_UP;
-        }
-        for (int i = s; i < headEnd; i++) {
-            if (space(b[i])) {
-                throw GIVE_UP;
-            }
-        }
-        int upper = intern(b, s, headEnd);
-        int i = colon + 1;
-        while (i < e) {
-            while (i < e && space(b[i])) {
-                i++;
-            }
-            int w = i;
-            while (i < e && !space(b[i])) {
-                if (b[i] == ':') {
-                    throw GIVE_UP;
-                }
-                i++;
-            }
-            if (i > w) {
-                if (i - w == headEnd - s && Arrays.equals(b, w, i, b, s, headEnd)) {
-                    throw GIVE_UP;
-                }
-                relate(intern(b, w, i), upper);
-            }
-        }
+        header(b, s, e);
+        return next;
     }
 
     private void header(byte[] b, int s, int e) throws GiveUp {
@@ -366,42 +419,86 @@ final class PosetFileParser {
         relations++;
     }
 
-    /** The id of the label {@code b[s..e)}, a new one if it was not seen before. */
-    private int intern(byte[] b, int s, int e) {
-        int h = hash(b, s, e);
-        int mask = table.length - 1;
-        for (int slot = h & mask; ; slot = (slot + 1) & mask) {
-            long entry = table[slot];
-            if (entry == 0) {
-                int id = add(b, s, e, h);
-                table[slot] = ((long) h << 32) | (id + 1);
-                if (2 * count > table.length) {
-                    rehash();
-                }
-                return id;
-            }
-            int id = (int) entry - 1;
-            if ((int) (entry >>> 32) == h && sameBytes(b, s, e, id)) {
-                return id;
-            }
+    /**
+     * Queues the label {@code b[s..e)} for lookup: as the upper element of the lines that follow,
+     * or as a lower element of the last upper one. Lookups are made a batch at a time so that the
+     * processor can wait for many table slots at once (see {@link #flush}).
+     */
+    private void queue(byte[] b, int s, int e, boolean upper) {
+        if (queued == QUEUE) {
+            flush(b);
         }
+        int t = queued++;
+        queuedStart[t] = upper ? ~s : s;
+        queuedEnd[t] = e;
+        long word = LabelSlots.word(b, s, e);
+        long key = LabelSlots.key(b, s, e);
+        queuedWord[t] = word;
+        queuedKey[t] = key;
     }
 
     /**
-     * The hash of the label {@code b[s..e)}: a polynomial in its bytes, then the finaliser of
-     * MurmurHash3, so that labels differing in one digit do not cluster under linear probing.
+     * Looks up the queued labels in order, and relates each lower one to its upper one. The slots
+     * are all touched first: those loads do not depend on each other, so their cache misses
+     * overlap instead of coming one after the other, which is most of the cost of reading a file.
      */
-    static int hash(byte[] b, int s, int e) {
-        int h = 0;
-        for (int i = s; i < e; i++) {
-            h = 31 * h + b[i];
+    private void flush(byte[] b) {
+        long[] slots = table;
+        int mask = (slots.length >> 1) - 1;
+        long touched = 0;
+        for (int t = 0; t < queued; t++) {
+            touched += slots[2 * LabelSlots.slotOf(queuedWord[t], queuedKey[t], mask) + 1];
         }
-        h ^= h >>> 16;
-        h *= 0x85EBCA6B;
-        h ^= h >>> 13;
-        h *= 0xC2B2AE35;
-        h ^= h >>> 16;
-        return h;
+        touchedSum += touched;
+        for (int t = 0; t < queued; t++) {
+            int s = queuedStart[t];
+            if (s < 0) {
+                upper = intern(b, ~s, queuedEnd[t], queuedWord[t], queuedKey[t]);
+            } else {
+                relate(intern(b, s, queuedEnd[t], queuedWord[t], queuedKey[t]), upper);
+            }
+        }
+        queued = 0;
+    }
+
+    private static final int QUEUE = 256;
+    private final int[] queuedStart = new int[QUEUE];
+    private final int[] queuedEnd = new int[QUEUE];
+    private final long[] queuedWord = new long[QUEUE];
+    private final long[] queuedKey = new long[QUEUE];
+    private int queued;
+    /** The upper element of the line being related; kept across batches, since a line may span two. */
+    private int upper;
+    /** Where the touched slots are summed, so that the compiler cannot drop the touching loads. */
+    private long touchedSum;
+
+    /**
+     * The id of the label {@code b[s..e)}, whose slot contents are {@code word} and {@code key},
+     * a new one if it was not seen before.
+     *
+     * <p>Only a label longer than {@link LabelSlots#INLINE} bytes is compared in the arena.
+     */
+    private int intern(byte[] b, int s, int e, long word, long key) {
+        long[] slots = table;
+        int mask = (slots.length >> 1) - 1;
+        for (int slot = LabelSlots.slotOf(word, key, mask); ; slot = (slot + 1) & mask) {
+            long entry = slots[2 * slot + 1];
+            if (entry == 0) {
+                int id = add(b, s, e);
+                slots[2 * slot] = word;
+                slots[2 * slot + 1] = key | (id + 1);
+                if (LabelSlots.crowded(count, mask + 1)) {
+                    table = LabelSlots.grow(table);
+                }
+                return id;
+            }
+            if ((entry & ~LabelSlots.ID_MASK) == key && slots[2 * slot] == word) {
+                int id = (int) (entry & LabelSlots.ID_MASK) - 1;
+                if (key != 0 || sameBytes(b, s, e, id)) {
+                    return id;
+                }
+            }
+        }
     }
 
     /** Number of labels of this region, in order of first appearance in it. */
@@ -458,7 +555,7 @@ final class PosetFileParser {
         return true;
     }
 
-    private int add(byte[] b, int s, int e, int h) {
+    private int add(byte[] b, int s, int e) {
         int length = e - s;
         if (arenaSize + length > arena.length) {
             arena = Arrays.copyOf(arena, Math.max(arenaSize + length, arena.length + (arena.length >> 1)));
@@ -473,18 +570,4 @@ final class PosetFileParser {
         return count++;
     }
 
-    private void rehash() {
-        long[] bigger = new long[table.length * 2];
-        int mask = bigger.length - 1;
-        for (long entry : table) {
-            if (entry != 0) {
-                int slot = (int) (entry >>> 32) & mask;
-                while (bigger[slot] != 0) {
-                    slot = (slot + 1) & mask;
-                }
-                bigger[slot] = entry;
-            }
-        }
-        table = bigger;
-    }
 }

@@ -155,6 +155,48 @@ class PosetFileParserTest {
     }
 
     @Test
+    void labelsOfEveryLengthAroundTheInlineLimitReadAsTheirText() throws IOException {
+        // lengths 1 to 20 share prefixes, so short labels held in their slot and long ones held
+        // by a hash meet on the same lines, in one stretch and split among threads
+        SplittableRandom random = new SplittableRandom(12);
+        StringBuilder text = new StringBuilder("morse-poset 1\n");
+        String[] labels = new String[4000];
+        for (int k = 0; k < labels.length; k++) {
+            String digits = Integer.toString(k);
+            int length = 1 + k % 20;
+            StringBuilder label = new StringBuilder();
+            while (label.length() + digits.length() < length) {
+                label.append(k % 3 == 0 ? 'x' : '.');
+            }
+            labels[k] = label.append(digits).toString();
+        }
+        while (text.length() < PosetFileParser.PARALLEL_FROM + 500_000) {
+            int y = 1 + random.nextInt(labels.length - 1);
+            text.append(labels[y]).append(':');
+            for (int j = random.nextInt(3); j >= 0; j--) {
+                text.append(' ').append(labels[random.nextInt(y)]);
+            }
+            text.append('\n');
+        }
+        assertReadsAsText(text.substring(0, 200_000 + text.substring(200_000).indexOf('\n') + 1), 40_000);
+        for (String threads : new String[] {"2", "3"}) {
+            String before = System.getProperty("morse.threads");
+            System.setProperty("morse.threads", threads);
+            try {
+                assertReadsAsText(text.toString(), 40_000 + threads.charAt(0) - '0');
+                // and the bytes were read by the byte reader, not left to the text reader
+                assertNotNull(PosetFileParser.read(dir.resolve("input" + (40_000 + threads.charAt(0) - '0') + ".poset")));
+            } finally {
+                if (before == null) {
+                    System.clearProperty("morse.threads");
+                } else {
+                    System.setProperty("morse.threads", before);
+                }
+            }
+        }
+    }
+
+    @Test
     void theByteReaderLeavesErrorsAndNonAsciiToTheTextReader() throws IOException {
         Path cycle = dir.resolve("cycle.poset");
         Files.writeString(cycle, "morse-poset 1\na: b\nb: a\n");

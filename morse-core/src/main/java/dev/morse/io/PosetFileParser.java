@@ -307,55 +307,64 @@ final class PosetFileParser {
      * starting with a colon, and any byte outside ASCII, comments included.
      */
     private int line(byte[] b, int i, int limit) throws GiveUp {
-        byte[] classes = CLASS;
-        byte c = SPACE;
-        while (i < limit && (c = classes[b[i] & 0xFF]) == SPACE) {
-            i++;
-        }
-        if (i == limit || c == LINE_END || c == COMMENT) {
+        i = skipSpaces(b, i, limit);
+        if (restIsBlank(b, i, limit)) {
             return lineEnd(b, i, limit);
         }
         if (!headerSeen) {
             return headerLine(b, i, limit);
         }
-        if (c != ORDINARY) {
-            throw GIVE_UP;
-        }
         int headStart = i;
-        while (i < limit && classes[b[i] & 0xFF] == ORDINARY) {
-            i++;
-        }
-        int headEnd = i;
+        int headEnd = wordEnd(b, i, limit);
         queue(b, headStart, headEnd, true);
-        while (i < limit && (c = classes[b[i] & 0xFF]) == SPACE) {
-            i++;
-        }
-        if (i == limit || c == LINE_END || c == COMMENT) {
+        i = skipSpaces(b, headEnd, limit);
+        if (restIsBlank(b, i, limit)) {
             return lineEnd(b, i, limit);
         }
-        if (c != COLON) {
+        if (CLASS[b[i] & 0xFF] != COLON) {
             throw GIVE_UP;
         }
-        i++;
-        while (true) {
-            while (i < limit && (c = classes[b[i] & 0xFF]) == SPACE) {
-                i++;
-            }
-            if (i == limit || c == LINE_END || c == COMMENT) {
-                return lineEnd(b, i, limit);
-            }
-            if (c != ORDINARY) {
-                throw GIVE_UP;
-            }
+        for (i = skipSpaces(b, i + 1, limit); !restIsBlank(b, i, limit); i = skipSpaces(b, i, limit)) {
             int w = i;
-            while (i < limit && (c = classes[b[i] & 0xFF]) == ORDINARY) {
-                i++;
-            }
+            i = wordEnd(b, w, limit);
             if (i - w == headEnd - headStart && Arrays.equals(b, w, i, b, headStart, headEnd)) {
                 throw GIVE_UP;
             }
             queue(b, w, i, false);
         }
+        return lineEnd(b, i, limit);
+    }
+
+    private static int skipSpaces(byte[] b, int i, int limit) {
+        while (i < limit && CLASS[b[i] & 0xFF] == SPACE) {
+            i++;
+        }
+        return i;
+    }
+
+    /** Whether nothing but a comment or the terminator is left of the line at {@code i}. */
+    private static boolean restIsBlank(byte[] b, int i, int limit) {
+        if (i == limit) {
+            return true;
+        }
+        byte c = CLASS[b[i] & 0xFF];
+        return c == LINE_END || c == COMMENT;
+    }
+
+    /**
+     * The end of the label starting at {@code i}: the first byte that is not a label byte. A label
+     * must start there, and it must end at white space, a comment or the line's end; a colon or a
+     * byte outside ASCII there (or at the start) makes the text reader decide.
+     */
+    private static int wordEnd(byte[] b, int i, int limit) throws GiveUp {
+        int e = i;
+        while (e < limit && CLASS[b[e] & 0xFF] == ORDINARY) {
+            e++;
+        }
+        if (e == i || e < limit && CLASS[b[e] & 0xFF] == FOREIGN) {
+            throw GIVE_UP;
+        }
+        return e;
     }
 
     /**
@@ -443,13 +452,7 @@ final class PosetFileParser {
      * overlap instead of coming one after the other, which is most of the cost of reading a file.
      */
     private void flush(byte[] b) {
-        long[] slots = table;
-        int mask = (slots.length >> 1) - 1;
-        long touched = 0;
-        for (int t = 0; t < queued; t++) {
-            touched += slots[2 * LabelSlots.slotOf(queuedWord[t], queuedKey[t], mask) + 1];
-        }
-        touchedSum += touched;
+        touchedSum += LabelSlots.touch(table, queuedWord, queuedKey, queued);
         for (int t = 0; t < queued; t++) {
             int s = queuedStart[t];
             if (s < 0) {

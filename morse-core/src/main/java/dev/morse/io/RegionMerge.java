@@ -201,12 +201,7 @@ final class RegionMerge {
         }
 
         private void flush() {
-            int mask = (table.length >> 1) - 1;
-            long touched = 0;
-            for (int t = 0; t < batched; t++) {
-                touched += table[2 * LabelSlots.slotOf(batchWord[t], batchKey[t], mask) + 1];
-            }
-            touchedSum += touched;
+            touchedSum += LabelSlots.touch(table, batchWord, batchKey, batched);
             for (int t = 0; t < batched; t++) {
                 first[batchRegion[t]][batchLabel[t]] = find(batchRegion[t], batchLabel[t], batchWord[t], batchKey[t]);
             }

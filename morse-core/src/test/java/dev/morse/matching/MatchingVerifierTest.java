@@ -1,5 +1,6 @@
 package dev.morse.matching;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -10,6 +11,7 @@ import dev.morse.complex.GradedCells;
 import dev.morse.complex.ListedComplex;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.io.SimplicialReader;
+import dev.morse.parallel.Workers;
 import org.junit.jupiter.api.Test;
 
 class MatchingVerifierTest {
@@ -26,6 +28,38 @@ class MatchingVerifierTest {
         MatchingVerdict verdict = MatchingVerifier.verify(circle, Matching.of(mates));
         assertFalse(verdict.valid());
         assertTrue(verdict.defect().contains("closed path"), verdict.defect());
+    }
+
+    @Test
+    void aClosedPathAmongEdgesAndTrianglesIsFoundWithEveryNumberOfThreads() {
+        // the boundary of a tetrahedron, its edges round vertex a paired with triangles so that the
+        // V-path ab, abc, ac, acd, ad, abd, ab closes (Forman 1998); vertices and bcd stay critical
+        ChainComplex sphere = SimplicialComplex.of(
+                SimplicialReader.parse("morse-simplicial 1\na b c\na b d\na c d\nb c d\n", "tetrahedron"));
+        assertEquals("{a b}", sphere.cellName(4));
+        assertEquals("{a b c}", sphere.cellName(10));
+        int[] mates = {-1, -1, -1, -1, 10, 12, 11, -1, -1, -1, 4, 6, 5, -1}; // ab-abc, ac-acd, ad-abd
+        for (String threads : new String[] {"1", "2", "3"}) {
+            String before = System.getProperty(Workers.THREADS_PROPERTY);
+            System.setProperty(Workers.THREADS_PROPERTY, threads);
+            try {
+                MatchingVerdict verdict = MatchingVerifier.verify(sphere, Matching.of(mates));
+                assertFalse(verdict.valid());
+                // the first cell left unsorted by Kahn's sort of the whole diagram
+                assertEquals("the gradient has a closed path through cell {a b}", verdict.defect());
+            } finally {
+                if (before == null) {
+                    System.clearProperty(Workers.THREADS_PROPERTY);
+                } else {
+                    System.setProperty(Workers.THREADS_PROPERTY, before);
+                }
+            }
+        }
+        // unpairing ad and abd opens the path: acyclic
+        int[] open = mates.clone();
+        open[6] = -1;
+        open[11] = -1;
+        assertTrue(MatchingVerifier.verify(sphere, Matching.of(open)).valid());
     }
 
     @Test

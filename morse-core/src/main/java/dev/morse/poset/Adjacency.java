@@ -55,7 +55,22 @@ public final class Adjacency extends CompressedRows {
         return entryCount();
     }
 
+    /**
+     * The source of every edge, edges ordered by source and then target; with {@link #edgeTargets},
+     * the list of edges. A new array.
+     */
+    public int[] edgeSources() {
+        int[] sources = new int[targets.length];
+        for (int x = 0; x < vertexCount(); x++) {
+            Arrays.fill(sources, offsets[x], offsets[x + 1], x);
+        }
+        return sources;
+    }
 
+    /** The target of every edge, in the order of {@link #edgeSources}. A new array. */
+    public int[] edgeTargets() {
+        return targets.clone();
+    }
 
     /** Number of neighbours of {@code x}. */
     public int degree(int x) {

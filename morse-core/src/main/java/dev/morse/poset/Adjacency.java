@@ -85,7 +85,13 @@ public final class Adjacency extends CompressedRows {
 
     /** Whether {@code y} is a neighbour of {@code x} (binary search). */
     public boolean contains(int x, int y) {
-        return Arrays.binarySearch(targets, offsets[x], offsets[x + 1], y) >= 0;
+        return indexOf(x, y) >= 0;
+    }
+
+    /** The index of {@code y} among the edges of {@code x} (binary search), or -1 when it is no neighbour. */
+    public int indexOf(int x, int y) {
+        int i = Arrays.binarySearch(targets, offsets[x], offsets[x + 1], y);
+        return i >= 0 ? i : -1;
     }
 
     /** The reversed graph. */

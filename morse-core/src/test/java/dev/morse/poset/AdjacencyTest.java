@@ -1,6 +1,7 @@
 package dev.morse.poset;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.junit.jupiter.api.Test;
 
@@ -22,5 +23,33 @@ class AdjacencyTest {
         graph.edgeTargets()[0] = 7;
         assertArrayEquals(new int[] {0}, graph.edgeSources());
         assertArrayEquals(new int[] {1}, graph.edgeTargets());
+    }
+
+    @Test
+    void indexOfFindsTheEdgeOrMinusOne() {
+        // rows by hand: 0 -> {1, 3} at indices 0, 1; 2 -> {0, 1} at indices 2, 3
+        Adjacency graph = Adjacency.fromEdges(4, new int[] {2, 0, 2, 0}, new int[] {0, 3, 1, 1}, 4);
+        assertEquals(1, graph.indexOf(0, 3));
+        assertEquals(2, graph.indexOf(2, 0));
+        assertEquals(-1, graph.indexOf(0, 2));
+        assertEquals(-1, graph.indexOf(1, 0));
+    }
+
+    @Test
+    void upSetsAreTheTransposeOfTheDownSets() {
+        // a < b < c and a < d, worked by hand: above a are b, c, d; above b is c; nothing above c, d
+        PosetBuilder builder = new PosetBuilder();
+        int a = builder.element("a");
+        int b = builder.element("b");
+        int c = builder.element("c");
+        int d = builder.element("d");
+        builder.relate(a, b, 0);
+        builder.relate(b, c, 0);
+        builder.relate(a, d, 0);
+        Adjacency up = StrictDownSets.of(builder.buildKnownAcyclic(), StrictDownSets.MAX_PAIRS).upSets();
+        assertArrayEquals(new int[] {b, c, d}, up.neighbours(a));
+        assertArrayEquals(new int[] {c}, up.neighbours(b));
+        assertArrayEquals(new int[0], up.neighbours(c));
+        assertArrayEquals(new int[0], up.neighbours(d));
     }
 }

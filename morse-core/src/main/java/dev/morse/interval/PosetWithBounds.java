@@ -23,8 +23,6 @@ public final class PosetWithBounds {
     private final Adjacency up;
     private final int[] positions;
     private final int[] linearExtension;
-    private final int[] minimal;
-    private final int[] maximal;
     private final boolean pure;
     private final int[] coverOffsets;
     private final int[] covers;
@@ -36,8 +34,6 @@ public final class PosetWithBounds {
         this.up = up;
         this.positions = poset.linearExtensionPositions();
         this.linearExtension = poset.linearExtension();
-        this.minimal = minimal;
-        this.maximal = maximal;
         this.pure = pure;
         // the lower covers of P̂: those of P, 0̂ below each minimal element, the maximal ones below 1̂
         int n = poset.size();
@@ -199,16 +195,6 @@ public final class PosetWithBounds {
     /** The element at an index of the lower covers of P̂. */
     int lowerCover(int i) {
         return covers[i];
-    }
-
-    /** Minimal elements of P (those covering 0̂ in P̂), ascending; shared, do not modify. */
-    int[] minimalElements() {
-        return minimal;
-    }
-
-    /** Maximal elements of P (those covered by 1̂ in P̂), ascending; shared, do not modify. */
-    int[] maximalElements() {
-        return maximal;
     }
 
     /** The strict down-sets of P. */

@@ -37,19 +37,19 @@ class AdjacencyTest {
 
     @Test
     void upSetsAreTheTransposeOfTheDownSets() {
-        // a < b < c and a < d, worked by hand: above a are b, c, d; above b is c; nothing above c, d
+        // a < b < c and a < d, ids 0 to 3, worked by hand: above a are b, c, d; above b is c;
+        // nothing above c or d
         PosetBuilder builder = new PosetBuilder();
-        int a = builder.element("a");
-        int b = builder.element("b");
-        int c = builder.element("c");
-        int d = builder.element("d");
-        builder.relate(a, b, 0);
-        builder.relate(b, c, 0);
-        builder.relate(a, d, 0);
+        for (String label : new String[] {"a", "b", "c", "d"}) {
+            builder.element(label);
+        }
+        for (int[] cover : new int[][] {{0, 1}, {1, 2}, {0, 3}}) {
+            builder.relate(cover[0], cover[1], 0);
+        }
         Adjacency up = StrictDownSets.of(builder.buildKnownAcyclic(), StrictDownSets.MAX_PAIRS).upSets();
-        assertArrayEquals(new int[] {b, c, d}, up.neighbours(a));
-        assertArrayEquals(new int[] {c}, up.neighbours(b));
-        assertArrayEquals(new int[0], up.neighbours(c));
-        assertArrayEquals(new int[0], up.neighbours(d));
+        assertArrayEquals(new int[] {1, 2, 3}, up.neighbours(0));
+        assertArrayEquals(new int[] {2}, up.neighbours(1));
+        assertArrayEquals(new int[0], up.neighbours(2));
+        assertArrayEquals(new int[0], up.neighbours(3));
     }
 }

@@ -7,18 +7,11 @@ import dev.morse.generate.Families;
 import dev.morse.generate.Generated;
 import dev.morse.generate.VoxelBlock;
 import dev.morse.poset.Poset;
-import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
-import org.openjdk.jmh.annotations.BenchmarkMode;
-import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Measurement;
-import org.openjdk.jmh.annotations.Mode;
-import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
-import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
-import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
@@ -26,13 +19,9 @@ import org.openjdk.jmh.annotations.Warmup;
  * signs) on posets already built: the boundary of the 8-cube, the proper part of B_12 and a
  * solid voxel block of 22^3 voxels. Threads as {@code -Dmorse.threads} says (default: all).
  */
-@State(Scope.Benchmark)
-@BenchmarkMode(Mode.AverageTime)
-@OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 3)
 @Measurement(iterations = 5)
-@Fork(value = 1, jvmArgsAppend = {"-Xmx2g"})
-public class CwCheckBenchmark {
+public class CwCheckBenchmark extends BenchmarkDefaults {
     /** Which poset: {@code cube:D}, {@code boolean:N} or {@code block:SIDE}. */
     @Param({"cube:8", "boolean:12", "block:22"})
     public String input;

@@ -13,15 +13,10 @@ import dev.morse.morsecomplex.MorseReduction;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.AuxCounters;
 import org.openjdk.jmh.annotations.Benchmark;
-import org.openjdk.jmh.annotations.BenchmarkMode;
-import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Measurement;
-import org.openjdk.jmh.annotations.Mode;
-import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
@@ -37,13 +32,9 @@ import org.openjdk.jmh.annotations.Warmup;
  * java -jar benchmarks/target/benchmarks.jar HardLibraryBenchmark -f 1 -wi 1 -i 3
  * </pre>
  */
-@State(Scope.Benchmark)
-@BenchmarkMode(Mode.AverageTime)
-@OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 1, time = 1)
 @Measurement(iterations = 3, time = 1)
-@Fork(value = 1, jvmArgsAppend = {"-Xmx2g"})
-public class HardLibraryBenchmark {
+public class HardLibraryBenchmark extends BenchmarkDefaults {
     /** The heuristic's name, as after {@code --matching}. */
     @Param({"coreduction", "collapse", "lexicographic", "random", "last-free-face", "freeing-collapse",
         "cancelling-collapse", "cancelling-freeing-collapse", "optimal"})

@@ -15,18 +15,12 @@ import dev.morse.implicit.ElementOrder;
 import dev.morse.input.InputReaders;
 import java.io.IOException;
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
-import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Measurement;
-import org.openjdk.jmh.annotations.Mode;
-import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
-import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
-import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
@@ -41,13 +35,10 @@ import org.openjdk.jmh.annotations.Warmup;
  * The built-in heuristics on voxel blocks with tunnels and cavities:
  * {@code -p input=voxels:22,voxels:50 -p heuristic=coreduction,collapse,random}.
  */
-@State(Scope.Benchmark)
-@BenchmarkMode(Mode.AverageTime)
-@OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 2)
 @Measurement(iterations = 5)
 @Fork(value = 1, jvmArgsAppend = {"-Xmx4g"})
-public class HeuristicBenchmark {
+public class HeuristicBenchmark extends BenchmarkDefaults {
     /** The prefix of {@link #input} that asks for a generated voxel block of the given side. */
     public static final String VOXELS = "voxels:";
 

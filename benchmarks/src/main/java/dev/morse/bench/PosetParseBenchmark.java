@@ -8,18 +8,14 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Measurement;
 import org.openjdk.jmh.annotations.Mode;
-import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Param;
-import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
-import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 
@@ -27,13 +23,11 @@ import org.openjdk.jmh.annotations.Warmup;
  * Time to read a covers-only poset file and build its Hasse diagram (parse, intern labels,
  * transitive reduction, both CSR directions), on cubical grid face posets.
  */
-@State(Scope.Benchmark)
 @BenchmarkMode(Mode.SingleShotTime)
-@OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 1)
 @Measurement(iterations = 3)
 @Fork(value = 1, jvmArgsAppend = {"-Xmx4g"})
-public class PosetParseBenchmark {
+public class PosetParseBenchmark extends BenchmarkDefaults {
     /** Side of the cube block: 50 gives 1,030,301 elements. */
     @Param({"22", "50"})
     public int side;

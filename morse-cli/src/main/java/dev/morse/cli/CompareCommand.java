@@ -38,7 +38,7 @@ final class CompareCommand implements Callable<Integer> {
     private EngineOptions engine;
 
     @Option(names = "--matching", paramLabel = "NAME[,NAME...]", split = ",",
-            completionCandidates = OptionConverters.MatchingNames.class,
+            completionCandidates = OptionConverters.MatchingValues.class,
             description = "Matchings to compare, in this order; available: ${COMPLETION-CANDIDATES}. Default: every"
                     + " built-in one except none. On an order complex generated on demand, implicit:ORDER names the"
                     + " implicit engine with an element order (implicit:down-sets, implicit:ids); default: the"

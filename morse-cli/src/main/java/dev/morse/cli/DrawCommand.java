@@ -46,8 +46,8 @@ final class DrawCommand implements Callable<Integer> {
             description = "Write the picture to this file and print a summary; without it the picture goes to standard output.")
     private Path output;
 
-    @Option(names = "--format", paramLabel = "FORMAT", converter = FormatConverter.class,
-            completionCandidates = FormatNames.class, defaultValue = "svg",
+    @Option(names = "--format", paramLabel = "FORMAT", converter = FormatValues.class,
+            completionCandidates = FormatValues.class, defaultValue = "svg",
             description = "svg (a picture, the default), dot (Graphviz) or graphml: the same nodes, covers and marks.")
     private Format format;
 
@@ -75,17 +75,10 @@ final class DrawCommand implements Callable<Integer> {
         }
     }
 
-    /** Reads {@code --format}. */
-    static final class FormatConverter extends OptionConverters.Parsed<Format> {
-        FormatConverter() {
-            super(Format::parse);
-        }
-    }
-
-    /** The names shown for {@code --format}. */
-    static final class FormatNames extends OptionConverters.Names {
-        FormatNames() {
-            super(() -> Stream.of(Format.values()).map(Format::optionName));
+    /** Reads {@code --format} and names its values. */
+    static final class FormatValues extends OptionConverters.Named<Format> {
+        FormatValues() {
+            super(Format::parse, () -> Stream.of(Format.values()).map(Format::optionName));
         }
     }
 

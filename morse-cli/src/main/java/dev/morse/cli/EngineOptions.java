@@ -11,7 +11,7 @@ import picocli.CommandLine.ParameterException;
 /** How homology is computed: the complex, the engine, the coefficients, and the reductions before matching. */
 final class EngineOptions {
     @Option(names = "--complex", paramLabel = "auto|order|cellular|implicit", defaultValue = "auto",
-            converter = OptionConverters.ComplexConverter.class, completionCandidates = OptionConverters.ComplexNames.class,
+            converter = OptionConverters.ComplexValues.class, completionCandidates = OptionConverters.ComplexValues.class,
             description = "Complex to build from a poset: cellular when it is a CW poset, else the order complex,"
                     + " stored or with chains generated on demand when they are too many (auto, the default);"
                     + " always the stored order complex; insist on the cellular complex; or always generate the"
@@ -32,8 +32,8 @@ final class EngineOptions {
     private boolean noPosetReduction;
 
     @Option(names = "--element-order", paramLabel = "NAME", defaultValue = "down-sets",
-            converter = OptionConverters.ElementOrderConverter.class,
-            completionCandidates = OptionConverters.ElementOrderNames.class,
+            converter = OptionConverters.ElementOrderValues.class,
+            completionCandidates = OptionConverters.ElementOrderValues.class,
             description = "Order of covers that fixes the matching of the order complex generated on demand;"
                     + " available: ${COMPLETION-CANDIDATES} (default ${DEFAULT-VALUE}).")
     private ElementOrder elementOrder;

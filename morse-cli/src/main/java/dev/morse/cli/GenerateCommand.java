@@ -4,14 +4,11 @@ import dev.morse.generate.FacePart;
 import dev.morse.generate.Families;
 import dev.morse.image.VolumeSize;
 import java.io.IOException;
-import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParameterException;
-import picocli.CommandLine.Spec;
 
 /**
  * {@code morse generate FAMILY ARGS -o FILE}: writes one poset or simplicial complex of a classical
@@ -25,13 +22,10 @@ import picocli.CommandLine.Spec;
         },
         synopsisSubcommandLabel = "FAMILY",
         footer = "%nExample: morse generate partition 5 --proper -o pi5.poset")
-final class GenerateCommand implements Callable<Integer> {
+final class GenerateCommand extends CommandGroup {
     private static final String PROPER = "Write the proper part (the lattice without its least and greatest elements).";
     private static final String PART = "boundary (default: the sphere), closed (the ball) or lattice (all faces, the"
             + " empty one included).";
-
-    @Spec
-    private CommandSpec spec;
 
     /** The size of the ground set of a lattice, and whether to keep only its proper part. */
     static final class LatticeOnSet {
@@ -52,10 +46,8 @@ final class GenerateCommand implements Callable<Integer> {
         FacePart part;
     }
 
-    @Override
-    public Integer call() {
-        throw new ParameterException(spec.commandLine(), "a family is required: "
-                + String.join(", ", spec.subcommands().keySet()));
+    GenerateCommand() {
+        super("a family");
     }
 
     @Command(name = "boolean", mixinStandardHelpOptions = true, description = "The Boolean lattice B_n of subsets of {1..n}; proper part: the"

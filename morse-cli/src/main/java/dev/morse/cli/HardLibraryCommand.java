@@ -28,7 +28,7 @@ final class HardLibraryCommand implements Callable<Integer> {
     private CommandSpec spec;
 
     @Option(names = "--matching", paramLabel = "NAME[,NAME...]", split = ",",
-            completionCandidates = OptionConverters.MatchingNames.class,
+            completionCandidates = OptionConverters.MatchingValues.class,
             description = "Matchings to compare, in this order; default: every one that comes with morse except none"
                     + " and optimal.")
     private List<String> matchings;

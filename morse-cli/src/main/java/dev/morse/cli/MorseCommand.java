@@ -4,12 +4,8 @@ import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
-import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.ParameterException;
-import picocli.CommandLine.Spec;
 
 /** The {@code morse} command: exact homology of posets and simplicial complexes. */
 @Command(name = "morse", mixinStandardHelpOptions = true,
@@ -21,9 +17,11 @@ import picocli.CommandLine.Spec;
             CompletionCommand.class,
             CommandLine.HelpCommand.class},
         footer = "%nExit codes: 0 success, 2 bad input or options, 1 internal failure.")
-public final class MorseCommand implements Callable<Integer> {
-    @Spec
-    private CommandSpec spec;
+public final class MorseCommand extends CommandGroup {
+    /** The command, without a command line around it; {@link #newCommandLine} gives one. */
+    public MorseCommand() {
+        super("a subcommand");
+    }
 
     /** Runs the command line and exits with its exit code. */
     public static void main(String[] args) {
@@ -75,21 +73,9 @@ public final class MorseCommand implements Callable<Integer> {
         return line;
     }
 
-    /** The usage error of a command run without one of its subcommands. */
-    static ParameterException subcommandRequired(CommandSpec spec) {
-        return new ParameterException(spec.commandLine(), "a subcommand is required: "
-                + String.join(", ", spec.subcommands().keySet()));
-    }
-
     /** Gives every command the one version provider, so that {@code --version} answers the same anywhere. */
     private static void withVersion(CommandLine line, VersionProvider provider) {
         line.getCommandSpec().versionProvider(provider);
         line.getSubcommands().values().forEach(sub -> withVersion(sub, provider));
-    }
-
-    /** Without a subcommand there is nothing to do: a usage error. */
-    @Override
-    public Integer call() {
-        throw subcommandRequired(spec);
     }
 }

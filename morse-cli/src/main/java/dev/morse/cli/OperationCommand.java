@@ -8,15 +8,11 @@ import dev.morse.io.InputFiles;
 import dev.morse.poset.Poset;
 import java.io.IOException;
 import java.nio.file.Path;
-import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Parameters;
 import java.util.function.Supplier;
 import java.util.function.UnaryOperator;
-import picocli.CommandLine.ParameterException;
-import picocli.CommandLine.Spec;
 
 /**
  * {@code morse op OPERATION POSET... -o FILE}: builds a new poset from poset files. Each operation
@@ -27,16 +23,11 @@ import picocli.CommandLine.Spec;
                 + " rank selection, or the face poset of the order complex.",
         synopsisSubcommandLabel = "OPERATION",
         footer = "%nExample: morse op product circle.poset circle.poset -o torus.poset")
-final class OperationCommand implements Callable<Integer> {
+final class OperationCommand extends CommandGroup {
     private static final String POSET = "A poset file (morse-poset 1).";
 
-    @Spec
-    private CommandSpec spec;
-
-    @Override
-    public Integer call() {
-        throw new ParameterException(spec.commandLine(), "an operation is required: "
-                + String.join(", ", spec.subcommands().keySet()));
+    OperationCommand() {
+        super("an operation");
     }
 
     @Command(name = "product", mixinStandardHelpOptions = true, description = "The product P x Q, ordered componentwise; its order complex is"

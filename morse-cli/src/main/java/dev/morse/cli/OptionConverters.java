@@ -42,11 +42,16 @@ final class OptionConverters {
         }
     }
 
-    /** The names of an option's values, for help and shell completion. */
-    abstract static class Names implements Iterable<String> {
+    /**
+     * A converter by a morse-core parse method that also names the values it accepts, for help and
+     * shell completion: one class serves as an option's {@code converter} and its
+     * {@code completionCandidates}.
+     */
+    abstract static class Named<T> extends Parsed<T> implements Iterable<String> {
         private final Supplier<Stream<String>> names;
 
-        Names(Supplier<Stream<String>> names) {
+        Named(Function<String, T> parse, Supplier<Stream<String>> names) {
+            super(parse);
             this.names = names;
         }
 
@@ -57,30 +62,16 @@ final class OptionConverters {
     }
 
     /** {@code auto}, {@code order}, {@code cellular} or {@code implicit}. */
-    static final class ComplexConverter extends Parsed<ComplexChoice> {
-        ComplexConverter() {
-            super(ComplexChoice::parse);
-        }
-    }
-
-    /** The names shown for {@code --complex}. */
-    static final class ComplexNames extends Names {
-        ComplexNames() {
-            super(() -> Stream.of(ComplexChoice.values()).map(ComplexChoice::optionName));
+    static final class ComplexValues extends Named<ComplexChoice> {
+        ComplexValues() {
+            super(ComplexChoice::parse, () -> Stream.of(ComplexChoice.values()).map(ComplexChoice::optionName));
         }
     }
 
     /** An element order of the implicit order complex. */
-    static final class ElementOrderConverter extends Parsed<ElementOrder> {
-        ElementOrderConverter() {
-            super(ElementOrder::parse);
-        }
-    }
-
-    /** The names shown for {@code --element-order}. */
-    static final class ElementOrderNames extends Names {
-        ElementOrderNames() {
-            super(() -> Stream.of(ElementOrder.values()).map(ElementOrder::optionName));
+    static final class ElementOrderValues extends Named<ElementOrder> {
+        ElementOrderValues() {
+            super(ElementOrder::parse, () -> Stream.of(ElementOrder.values()).map(ElementOrder::optionName));
         }
     }
 
@@ -92,16 +83,9 @@ final class OptionConverters {
     }
 
     /** A matching name known to morse-core. */
-    static final class MatchingConverter extends Parsed<String> {
-        MatchingConverter() {
-            super(Request::requireKnownMatching);
-        }
-    }
-
-    /** The names shown for {@code --matching}. */
-    static final class MatchingNames extends Names {
-        MatchingNames() {
-            super(() -> MatchingHeuristics.everyKnown().keySet().stream());
+    static final class MatchingValues extends Named<String> {
+        MatchingValues() {
+            super(Request::requireKnownMatching, () -> MatchingHeuristics.everyKnown().keySet().stream());
         }
     }
 

@@ -1,7 +1,6 @@
 package dev.morse.complex;
 
 import dev.morse.poset.Poset;
-import dev.morse.poset.PosetBuilder;
 
 /** The face poset of an order complex, as a poset: one element per chain. */
 public final class Subdivision {
@@ -28,19 +27,12 @@ public final class Subdivision {
         } catch (IllegalStateException e) {
             throw new IllegalArgumentException("too many chains for their face poset: " + e.getMessage());
         }
-        PosetBuilder b = new PosetBuilder();
-        for (int c = 0; c < complex.cellCount(); c++) {
-            b.element(complex.cellName(c));
+        try {
+            return complex.facePoset();
+        } catch (IllegalArgumentException e) {
+            // the one failure left: two cells of one name
+            throw new IllegalArgumentException(
+                    "two chains get the same label; labels containing '<' are ambiguous here", e);
         }
-        if (b.size() != complex.cellCount()) {
-            throw new IllegalArgumentException("two chains get the same label; labels containing '<' are ambiguous here");
-        }
-        Boundary boundary = complex.boundary();
-        for (int c = 0; c < complex.cellCount(); c++) {
-            for (int i = boundary.start(c); i < boundary.end(c); i++) {
-                b.relate(boundary.target(i), c, 0);
-            }
-        }
-        return b.buildKnownAcyclic();
     }
 }

@@ -1,5 +1,7 @@
 package dev.morse.complex;
 
+import dev.morse.poset.Poset;
+import dev.morse.poset.PosetBuilder;
 import java.util.Arrays;
 import java.util.function.IntFunction;
 
@@ -33,6 +35,29 @@ public abstract class TupleComplex extends StoredComplex {
         int d = grading().dimensionOf(cell);
         int local = cell - grading().firstCell(d);
         return Arrays.copyOfRange(tuples[d], local * (d + 1), (local + 1) * (d + 1));
+    }
+
+    /**
+     * The face poset: one element per cell, labelled by its {@link #cellName}, covering the faces in
+     * its boundary. Its order complex is the barycentric subdivision of this complex.
+     *
+     * @throws IllegalArgumentException if two cells have the same name
+     */
+    public final Poset facePoset() {
+        PosetBuilder b = new PosetBuilder();
+        for (int c = 0; c < cellCount(); c++) {
+            b.element(cellName(c));
+        }
+        if (b.size() != cellCount()) {
+            throw new IllegalArgumentException("two cells have the same name");
+        }
+        Boundary boundary = boundary();
+        for (int c = 0; c < cellCount(); c++) {
+            for (int i = boundary.start(c); i < boundary.end(c); i++) {
+                b.relate(boundary.target(i), c, 0);
+            }
+        }
+        return b.buildKnownAcyclic();
     }
 
     /** The labels of a cell's tuple joined by {@code separator}, between {@code open} and {@code close}. */

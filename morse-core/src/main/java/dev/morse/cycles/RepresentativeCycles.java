@@ -18,8 +18,8 @@ import java.util.Locale;
  * the Morse complex's homology ({@link MorseGenerators}) lifted along the gradient flow
  * ({@link FlowLift}) to cycles of the complex the homology was computed on, shortened by adding
  * boundaries ({@link CycleShortening}), and written in the input's labels. Beside each cycle the
- * dual flow ({@link CochainLift}) lifts a cocycle that certifies it, and for torsion over Z the flow
- * lifts a chain it bounds t times; {@link CycleVerifier}, which shares nothing with the reduction,
+ * reversed flow ({@link FlowLift#cochain}) lifts a cocycle that certifies it, and for torsion over
+ * Z the flow lifts a chain it bounds t times; {@link CycleVerifier}, which shares nothing with the reduction,
  * checks these certificates on the complex after shortening: zero boundaries, exact orders,
  * independence, and a direct summand isomorphic to the printed group. A failure is an
  * {@link IllegalStateException}, never a wrong cycle. When a poset was shrunk before its order
@@ -96,22 +96,21 @@ public final class RepresentativeCycles {
     private static List<Certificate> certificates(ChainComplex complex, Matching matching, MorseComplex morse,
             Coefficients ring) {
         FlowLift flow = new FlowLift(complex, matching);
-        CochainLift coflow = new CochainLift(complex, matching);
         List<Certificate> certificates = new ArrayList<>();
         java.util.Map<Integer, int[]> criticalByDimension = new java.util.HashMap<>();
         for (MorseGenerators.Generator g : MorseGenerators.of(morse, ring)) {
             int d = g.dimension();
             int[] critical = criticalByDimension.computeIfAbsent(d, k -> matching.criticalCells(complex, k));
-            Int2ObjectOpenHashMap<BigInteger> chain = flow.lift(onCells(critical, g.coefficients()), d);
+            Int2ObjectOpenHashMap<BigInteger> chain = flow.chain(onCells(critical, g.coefficients()), d);
             Int2ObjectOpenHashMap<BigInteger> preimage = null;
             if (g.preimage() != null && ring.ring() == Coefficients.Ring.INTEGERS) {
                 int[] above = criticalByDimension.computeIfAbsent(d + 1, k -> matching.criticalCells(complex, k));
-                preimage = flow.lift(onCells(above, g.preimage()), d + 1);
+                preimage = flow.chain(onCells(above, g.preimage()), d + 1);
             }
             BigInteger modulus = ring.ring() == Coefficients.Ring.PRIME_FIELD ? BigInteger.valueOf(ring.prime())
                     : g.order();
             Int2ObjectOpenHashMap<BigInteger> cocycle = d == 0 ? new Int2ObjectOpenHashMap<>() // components certify H_0
-                    : coflow.lift(critical, g.cocycle(), d, modulus);
+                    : flow.cochain(critical, g.cocycle(), d, modulus);
             certificates.add(new Certificate(d, g.order(), chain, preimage, cocycle, nonzero(chain, ring)));
         }
         return certificates;

@@ -1,6 +1,7 @@
 package dev.morse.cycles;
 
 import java.math.BigInteger;
+import java.util.Arrays;
 
 /**
  * The Smith normal form of a small dense integer matrix with its unimodular transforms:
@@ -130,11 +131,7 @@ public final class SmithTransforms {
     }
 
     private static BigInteger[][] copy(BigInteger[][] m) {
-        BigInteger[][] c = new BigInteger[m.length][];
-        for (int i = 0; i < m.length; i++) {
-            c[i] = m[i].clone();
-        }
-        return c;
+        return Arrays.stream(m).map(BigInteger[]::clone).toArray(BigInteger[][]::new);
     }
 
     private static BigInteger[][] identity(int n) {

@@ -3,8 +3,6 @@ package dev.morse.generate;
 import dev.morse.poset.PosetOperations;
 
 import dev.morse.poset.Poset;
-import dev.morse.poset.PosetBuilder;
-import it.unimi.dsi.fastutil.objects.Object2IntOpenHashMap;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -37,25 +35,7 @@ public final class NoncrossingPartitionLattice {
                 partitions.add(blockOf);
             }
         }
-        PosetBuilder b = new PosetBuilder();
-        Object2IntOpenHashMap<String> ids = new Object2IntOpenHashMap<>();
-        ids.defaultReturnValue(-1);
-        for (int[] blockOf : partitions) {
-            ids.put(Arrays.toString(blockOf), b.element(PartitionLattice.label(blockOf)));
-        }
-        for (int[] blockOf : partitions) {
-            int id = ids.getInt(Arrays.toString(blockOf));
-            int blocks = PartitionLattice.blockCount(blockOf);
-            for (int s = 0; s < blocks; s++) {
-                for (int t = s + 1; t < blocks; t++) {
-                    int upper = ids.getInt(Arrays.toString(PartitionLattice.merge(blockOf, s, t)));
-                    if (upper >= 0) {
-                        b.relate(id, upper, 0);
-                    }
-                }
-            }
-        }
-        return b.buildKnownAcyclic();
+        return PartitionLattice.byRefinement(partitions);
     }
 
     /** The proper part: noncrossing partitions other than the finest and the coarsest; {@code n ≥ 2}. */

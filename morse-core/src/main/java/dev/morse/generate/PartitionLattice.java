@@ -29,21 +29,7 @@ public final class PartitionLattice {
         Sizes.inRange("n", n, 1, MAX_N);
         List<int[]> partitions = new ArrayList<>();
         growthStrings(new int[n], 0, 0, partitions);
-        PosetBuilder b = new PosetBuilder();
-        Object2IntOpenHashMap<String> ids = new Object2IntOpenHashMap<>();
-        for (int[] blockOf : partitions) {
-            ids.put(Arrays.toString(blockOf), b.element(label(blockOf)));
-        }
-        for (int[] blockOf : partitions) {
-            int id = ids.getInt(Arrays.toString(blockOf));
-            int blocks = blockCount(blockOf);
-            for (int s = 0; s < blocks; s++) {
-                for (int t = s + 1; t < blocks; t++) {
-                    b.relate(id, ids.getInt(Arrays.toString(merge(blockOf, s, t))), 0);
-                }
-            }
-        }
-        return b.buildKnownAcyclic();
+        return byRefinement(partitions);
     }
 
     /** The proper part: partitions other than the finest and the coarsest; for {@code n ≥ 2}. */
@@ -52,6 +38,33 @@ public final class PartitionLattice {
             throw new IllegalArgumentException("the proper part needs n ≥ 2, got " + n);
         }
         return PosetOperations.properPart(lattice(n));
+    }
+
+    /**
+     * The given partitions (growth strings), in the order given and labelled by {@link #label},
+     * each below those among them made by merging two of its blocks: the covers of the partition
+     * lattice, and of the noncrossing partition lattice when given only the noncrossing partitions.
+     */
+    static Poset byRefinement(List<int[]> partitions) {
+        PosetBuilder b = new PosetBuilder();
+        Object2IntOpenHashMap<String> ids = new Object2IntOpenHashMap<>();
+        ids.defaultReturnValue(-1);
+        for (int[] blockOf : partitions) {
+            ids.put(Arrays.toString(blockOf), b.element(label(blockOf)));
+        }
+        for (int[] blockOf : partitions) {
+            int id = ids.getInt(Arrays.toString(blockOf));
+            int blocks = blockCount(blockOf);
+            for (int s = 0; s < blocks; s++) {
+                for (int t = s + 1; t < blocks; t++) {
+                    int upper = ids.getInt(Arrays.toString(merge(blockOf, s, t)));
+                    if (upper >= 0) {
+                        b.relate(id, upper, 0);
+                    }
+                }
+            }
+        }
+        return b.buildKnownAcyclic();
     }
 
     /**

@@ -15,13 +15,9 @@ public final class SmallPosets {
 
     /** The chain of {@code k} elements labelled {@code prefix1 < prefix2 < ...}. */
     public static Poset chain(int k, String prefix) {
-        requirePositive(k);
-        PosetBuilder b = new PosetBuilder();
-        for (int i = 1; i <= k; i++) {
-            int x = b.element(PosetBuilder.requireWritableLabel(prefix + i));
-            if (i > 1) {
-                b.relate(x - 1, x, 0);
-            }
+        PosetBuilder b = elements(k, prefix);
+        for (int x = 1; x < k; x++) {
+            b.relate(x - 1, x, 0);
         }
         return b.buildKnownAcyclic();
     }
@@ -33,17 +29,18 @@ public final class SmallPosets {
 
     /** {@code k} pairwise incomparable elements labelled {@code prefix1 .. prefixk}. */
     public static Poset antichain(int k, String prefix) {
-        requirePositive(k);
+        return elements(k, prefix).buildKnownAcyclic();
+    }
+
+    /** A builder holding {@code k ≥ 1} elements labelled {@code prefix1 .. prefixk}, ids 0 .. k-1, and no relations. */
+    private static PosetBuilder elements(int k, String prefix) {
+        if (k < 1) {
+            throw new IllegalArgumentException("need at least one element, got " + k);
+        }
         PosetBuilder b = new PosetBuilder();
         for (int i = 1; i <= k; i++) {
             b.element(PosetBuilder.requireWritableLabel(prefix + i));
         }
-        return b.buildKnownAcyclic();
-    }
-
-    private static void requirePositive(int k) {
-        if (k < 1) {
-            throw new IllegalArgumentException("need at least one element, got " + k);
-        }
+        return b;
     }
 }

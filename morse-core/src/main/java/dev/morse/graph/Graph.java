@@ -1,19 +1,19 @@
 package dev.morse.graph;
 
+import dev.morse.poset.Adjacency;
 import java.util.Arrays;
 
 /**
  * A finite simple undirected graph: vertices are ints {@code 0..n-1} with labels, and each vertex's
- * neighbours in a CSR array, ascending. Memory: 4 bytes per vertex plus 8 per edge. Immutable.
+ * neighbours as an {@link Adjacency} holding each edge both ways, ascending. Memory: 4 bytes per
+ * vertex plus 8 per edge. Immutable.
  */
 public final class Graph {
     private final String[] labels;
-    private final int[] offsets;
-    private final int[] neighbours;
+    private final Adjacency neighbours;
 
-    private Graph(String[] labels, int[] offsets, int[] neighbours) {
+    private Graph(String[] labels, Adjacency neighbours) {
         this.labels = labels;
-        this.offsets = offsets;
         this.neighbours = neighbours;
     }
 
@@ -44,26 +44,17 @@ public final class Graph {
                 keys[distinct++] = keys[i];
             }
         }
-        int[] offsets = new int[n + 1];
-        for (int i = 0; i < distinct; i++) {
-            offsets[(int) (keys[i] >>> 32) + 1]++;
-            offsets[(int) keys[i] + 1]++;
-        }
-        for (int v = 0; v < n; v++) {
-            offsets[v + 1] += offsets[v];
-        }
-        int[] fill = Arrays.copyOf(offsets, n);
-        int[] neighbours = new int[2 * distinct];
+        int[] from = new int[2 * distinct];
+        int[] to = new int[2 * distinct];
         for (int i = 0; i < distinct; i++) {
             int u = (int) (keys[i] >>> 32);
             int v = (int) keys[i];
-            neighbours[fill[u]++] = v;
-            neighbours[fill[v]++] = u;
+            from[2 * i] = u;
+            to[2 * i] = v;
+            from[2 * i + 1] = v;
+            to[2 * i + 1] = u;
         }
-        for (int v = 0; v < n; v++) {
-            Arrays.sort(neighbours, offsets[v], offsets[v + 1]);
-        }
-        return new Graph(labels.clone(), offsets, neighbours);
+        return new Graph(labels.clone(), Adjacency.fromEdges(n, from, to, 2 * distinct));
     }
 
     /** Number of vertices. */
@@ -73,7 +64,7 @@ public final class Graph {
 
     /** Number of edges. */
     public int edgeCount() {
-        return neighbours.length / 2;
+        return neighbours.edgeCount() / 2;
     }
 
     /** The label of vertex {@code v}. */
@@ -83,16 +74,16 @@ public final class Graph {
 
     /** The number of neighbours of {@code v}. */
     public int degree(int v) {
-        return offsets[v + 1] - offsets[v];
+        return neighbours.degree(v);
     }
 
     /** The {@code i}-th neighbour of {@code v}, ascending in {@code i}. */
     public int neighbour(int v, int i) {
-        return neighbours[offsets[v] + i];
+        return neighbours.target(neighbours.start(v) + i);
     }
 
     /** Whether {@code u} and {@code v} are joined by an edge (binary search). */
     public boolean adjacent(int u, int v) {
-        return Arrays.binarySearch(neighbours, offsets[u], offsets[u + 1], v) >= 0;
+        return neighbours.contains(u, v);
     }
 }

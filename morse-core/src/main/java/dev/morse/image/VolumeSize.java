@@ -15,14 +15,12 @@ public record VolumeSize(int[] extents) {
             throw new IllegalArgumentException("give two or three sizes, like 64,64,32");
         }
         extents = extents.clone();
-        long voxels = 1;
         for (int e : extents) {
             if (e < 1) {
                 throw new IllegalArgumentException("every size must be at least 1, not " + e);
             }
-            voxels *= e;
         }
-        if (voxels > VoxelSet.MAX_POSITIONS) {
+        if (VoxelSet.positions(extents) > VoxelSet.MAX_POSITIONS) {
             throw new IllegalArgumentException("a volume of " + VoxelSet.describe(extents) + " has more than "
                     + VoxelSet.MAX_POSITIONS + " voxels");
         }
@@ -54,11 +52,7 @@ public record VolumeSize(int[] extents) {
 
     /** The number of voxels. */
     public int voxels() {
-        int v = 1;
-        for (int e : extents) {
-            v *= e;
-        }
-        return v;
+        return (int) VoxelSet.positions(extents);
     }
 
     @Override

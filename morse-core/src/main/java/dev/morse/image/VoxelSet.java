@@ -52,11 +52,16 @@ public final class VoxelSet {
 
     /** Number of positions in the box. */
     public int positions() {
+        return (int) positions(sizes);
+    }
+
+    /** The product of {@code sizes}: the number of positions of a box of these extents. */
+    static long positions(int[] sizes) {
         long p = 1;
         for (int s : sizes) {
             p *= s;
         }
-        return (int) p;
+        return p;
     }
 
     /** Number of positions in the set. */

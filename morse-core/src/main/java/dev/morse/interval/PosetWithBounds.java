@@ -20,26 +20,20 @@ public final class PosetWithBounds {
 
     private final Poset poset;
     private final StrictDownSets down;
-    private final int[] upOffsets;
-    private final int[] up;
+    private final Adjacency up;
     private final int[] positions;
     private final int[] linearExtension;
-    private final int[] minimal;
-    private final int[] maximal;
     private final boolean pure;
     private final int[] coverOffsets;
     private final int[] covers;
 
-    private PosetWithBounds(Poset poset, StrictDownSets down, int[] upOffsets, int[] up, int[] minimal,
-            int[] maximal, boolean pure) {
+    private PosetWithBounds(Poset poset, StrictDownSets down, Adjacency up, int[] minimal, int[] maximal,
+            boolean pure) {
         this.poset = poset;
         this.down = down;
-        this.upOffsets = upOffsets;
         this.up = up;
         this.positions = poset.linearExtensionPositions();
         this.linearExtension = poset.linearExtension();
-        this.minimal = minimal;
-        this.maximal = maximal;
         this.pure = pure;
         // the lower covers of P̂: those of P, 0̂ below each minimal element, the maximal ones below 1̂
         int n = poset.size();
@@ -79,30 +73,13 @@ public final class PosetWithBounds {
             throw new IllegalArgumentException(n + " elements, more than the " + MAX_ELEMENTS + " an interval sweep takes");
         }
         StrictDownSets down = StrictDownSets.of(poset, StrictDownSets.MAX_PAIRS);
-        int[] upOffsets = new int[n + 1];
-        for (int y = 0; y < n; y++) {
-            for (int i = down.start(y); i < down.end(y); i++) {
-                upOffsets[down.element(i) + 1]++;
-            }
-        }
-        for (int x = 0; x < n; x++) {
-            upOffsets[x + 1] += upOffsets[x];
-        }
-        int[] fill = Arrays.copyOf(upOffsets, n);
-        int[] up = new int[(int) down.pairCount()];
-        for (int y = 0; y < n; y++) {
-            // y ascends, so every up-set comes out sorted
-            for (int i = down.start(y); i < down.end(y); i++) {
-                up[fill[down.element(i)]++] = y;
-            }
-        }
         int[] minimal = extremes(poset.lowerCovers());
         int[] maximal = extremes(poset.upperCovers());
         boolean pure = poset.isGraded();
         for (int x : maximal) {
             pure &= poset.height(x) == poset.maxHeight();
         }
-        return new PosetWithBounds(poset, down, upOffsets, up, minimal, maximal, pure);
+        return new PosetWithBounds(poset, down, down.upSets(), minimal, maximal, pure);
     }
 
     private static int[] extremes(Adjacency covers) {
@@ -190,7 +167,7 @@ public final class PosetWithBounds {
             }
             return all;
         }
-        int[] above = Arrays.copyOfRange(up, upOffsets[x], upOffsets[x + 1] + 1);
+        int[] above = Arrays.copyOf(up.neighbours(x), up.degree(x) + 1);
         above[above.length - 1] = top();
         return above;
     }
@@ -220,16 +197,6 @@ public final class PosetWithBounds {
         return covers[i];
     }
 
-    /** Minimal elements of P (those covering 0̂ in P̂), ascending; shared, do not modify. */
-    int[] minimalElements() {
-        return minimal;
-    }
-
-    /** Maximal elements of P (those covered by 1̂ in P̂), ascending; shared, do not modify. */
-    int[] maximalElements() {
-        return maximal;
-    }
-
     /** The strict down-sets of P. */
     StrictDownSets downSets() {
         return down;
@@ -237,23 +204,22 @@ public final class PosetWithBounds {
 
     /** First index in {@link #upElement} of the elements of P strictly above {@code x}. */
     int upStart(int x) {
-        return upOffsets[x];
+        return up.start(x);
     }
 
     /** One past the last index of the elements of P strictly above {@code x}. */
     int upEnd(int x) {
-        return upOffsets[x + 1];
+        return up.end(x);
     }
 
     /** The index of {@code y} among the elements above {@code x} in P, or -1 when {@code y} is not above it. */
     int upIndex(int x, int y) {
-        int i = Arrays.binarySearch(up, upOffsets[x], upOffsets[x + 1], y);
-        return i >= 0 ? i : -1;
+        return up.indexOf(x, y);
     }
 
     /** The element at an index of the up-sets. */
     int upElement(int i) {
-        return up[i];
+        return up.target(i);
     }
 
     /**
@@ -278,7 +244,7 @@ public final class PosetWithBounds {
         if (y == top()) {
             int k = 0;
             for (int i = upStart(x); i < upEnd(x); i++) {
-                out[k++] = up[i];
+                out[k++] = up.target(i);
             }
             return k;
         }
@@ -288,7 +254,7 @@ public final class PosetWithBounds {
         int jEnd = down.end(y);
         int k = 0;
         while (i < iEnd && j < jEnd) {
-            int a = up[i];
+            int a = up.target(i);
             int b = down.element(j);
             if (a == b) {
                 out[k++] = a;

@@ -1,6 +1,5 @@
 package dev.morse.interval;
 
-import dev.morse.complex.Boundary;
 import dev.morse.complex.SimplicialComplex;
 import dev.morse.input.FacetInput;
 import dev.morse.input.Input;
@@ -8,7 +7,6 @@ import dev.morse.input.PosetInput;
 import dev.morse.input.VoxelInput;
 import dev.morse.io.InputException;
 import dev.morse.poset.Poset;
-import dev.morse.poset.PosetBuilder;
 
 /**
  * The poset whose intervals a sweep visits, for each kind of input: a poset file's own poset; for a
@@ -31,24 +29,9 @@ public final class SweepInputs {
             return poset.poset();
         }
         if (input instanceof FacetInput facets) {
-            return facePoset(SimplicialComplex.of(facets.facets()));
+            return SimplicialComplex.of(facets.facets()).facePoset();
         }
         throw new InputException(input.source(), InputException.NO_LINE, "an interval sweep needs a poset or a"
                 + " simplicial file, not " + (input instanceof VoxelInput ? "an image" : "a chain complex given by matrices"));
-    }
-
-    /** The nonempty faces of {@code complex} ordered by inclusion, each covering its facets. */
-    static Poset facePoset(SimplicialComplex complex) {
-        PosetBuilder b = new PosetBuilder();
-        for (int c = 0; c < complex.cellCount(); c++) {
-            b.element(complex.cellName(c));
-        }
-        Boundary boundary = complex.boundary();
-        for (int c = 0; c < complex.cellCount(); c++) {
-            for (int i = boundary.start(c); i < boundary.end(c); i++) {
-                b.relate(boundary.target(i), c, 0);
-            }
-        }
-        return b.buildKnownAcyclic();
     }
 }

@@ -1,27 +1,23 @@
 package dev.morse.io;
 
+import dev.morse.complex.Boundary;
 import java.util.Arrays;
 
 /**
  * One boundary matrix as read from a file: its size and its nonzero entries column by column (a
  * column per cell of the higher dimension, a row per cell of the lower), rows ascending within a
- * column. Memory: 8 bytes per entry and 4 per column. Immutable.
+ * column, held as a {@link Boundary} whose cells are the columns. Memory: 8 bytes per entry and 4
+ * per column. Immutable.
  */
 public final class BoundaryMatrix {
     private final String source;
     private final int rows;
-    private final int columns;
-    private final int[] offsets;
-    private final int[] rowIndex;
-    private final int[] values;
+    private final Boundary byColumn;
 
-    private BoundaryMatrix(String source, int rows, int columns, int[] offsets, int[] rowIndex, int[] values) {
+    private BoundaryMatrix(String source, int rows, Boundary byColumn) {
         this.source = source;
         this.rows = rows;
-        this.columns = columns;
-        this.offsets = offsets;
-        this.rowIndex = rowIndex;
-        this.values = values;
+        this.byColumn = byColumn;
     }
 
     /**
@@ -68,7 +64,7 @@ public final class BoundaryMatrix {
                 sortedValues[k] = values[entry];
             }
         }
-        return new BoundaryMatrix(source, rows, columns, offsets, rowIndex, sortedValues);
+        return new BoundaryMatrix(source, rows, new Boundary(offsets, rowIndex, sortedValues));
     }
 
     /** The file it was read from, as given. */
@@ -83,31 +79,31 @@ public final class BoundaryMatrix {
 
     /** Number of columns: cells of the higher dimension. */
     public int columns() {
-        return columns;
+        return byColumn.cellCount();
     }
 
     /** Number of nonzero entries. */
     public int nonZeros() {
-        return rowIndex.length;
+        return byColumn.entryCount();
     }
 
     /** Index of the first entry of column {@code c}. */
     public int start(int c) {
-        return offsets[c];
+        return byColumn.start(c);
     }
 
     /** Index past the last entry of column {@code c}. */
     public int end(int c) {
-        return offsets[c + 1];
+        return byColumn.end(c);
     }
 
     /** The 0-based row of entry {@code i}. */
     public int row(int i) {
-        return rowIndex[i];
+        return byColumn.target(i);
     }
 
     /** The value of entry {@code i}, never 0. */
     public int value(int i) {
-        return values[i];
+        return byColumn.coefficient(i);
     }
 }

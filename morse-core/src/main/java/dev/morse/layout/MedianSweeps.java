@@ -141,10 +141,6 @@ public final class MedianSweeps implements LayerOrdering {
     }
 
     private static int[][] copy(int[][] rows) {
-        int[][] out = new int[rows.length][];
-        for (int l = 0; l < rows.length; l++) {
-            out[l] = rows[l].clone();
-        }
-        return out;
+        return Arrays.stream(rows).map(int[]::clone).toArray(int[][]::new);
     }
 }

@@ -23,10 +23,7 @@ public record OptimalMatching(Matching matching, int[] critical, boolean proven,
         Objects.requireNonNull(matching, "matching");
         Objects.requireNonNull(elapsed, "elapsed");
         critical = critical.clone();
-        long total = 0;
-        for (int m : critical) {
-            total += m;
-        }
+        long total = total(critical);
         if (lowerBound > total || (proven && lowerBound != total)) {
             throw new IllegalArgumentException("bound " + lowerBound + " inconsistent with " + total + " critical cells"
                     + (proven ? " proven optimal" : ""));
@@ -41,6 +38,10 @@ public record OptimalMatching(Matching matching, int[] critical, boolean proven,
 
     /** Total critical cells of the matching. */
     public long criticalTotal() {
+        return total(critical);
+    }
+
+    private static long total(int[] critical) {
         long total = 0;
         for (int m : critical) {
             total += m;

@@ -55,7 +55,22 @@ public final class Adjacency extends CompressedRows {
         return entryCount();
     }
 
+    /**
+     * The source of every edge, edges ordered by source and then target; with {@link #edgeTargets},
+     * the list of edges. A new array.
+     */
+    public int[] edgeSources() {
+        int[] sources = new int[targets.length];
+        for (int x = 0; x < vertexCount(); x++) {
+            Arrays.fill(sources, offsets[x], offsets[x + 1], x);
+        }
+        return sources;
+    }
 
+    /** The target of every edge, in the order of {@link #edgeSources}. A new array. */
+    public int[] edgeTargets() {
+        return targets.clone();
+    }
 
     /** Number of neighbours of {@code x}. */
     public int degree(int x) {
@@ -70,7 +85,13 @@ public final class Adjacency extends CompressedRows {
 
     /** Whether {@code y} is a neighbour of {@code x} (binary search). */
     public boolean contains(int x, int y) {
-        return Arrays.binarySearch(targets, offsets[x], offsets[x + 1], y) >= 0;
+        return indexOf(x, y) >= 0;
+    }
+
+    /** The index of {@code y} among the edges of {@code x} (binary search), or -1 when it is no neighbour. */
+    public int indexOf(int x, int y) {
+        int i = Arrays.binarySearch(targets, offsets[x], offsets[x + 1], y);
+        return i >= 0 ? i : -1;
     }
 
     /** The reversed graph. */

@@ -96,6 +96,16 @@ public final class StrictDownSets extends CompressedRows {
         return target(i);
     }
 
+    /**
+     * The up-sets: for every element the elements strictly above it, ascending, as the graph from
+     * each element to those (the transpose of the down-sets). Memory: as much again.
+     */
+    public Adjacency upSets() {
+        int[] above = new int[targets.length];
+        int[] upOffsets = transpose(size(), (i, x, slot) -> above[slot] = x);
+        return new Adjacency(upOffsets, above);
+    }
+
     /** Whether {@code y < x}, by binary search. */
     public boolean isBelow(int y, int x) {
         return Arrays.binarySearch(targets, offsets[x], offsets[x + 1], y) >= 0;

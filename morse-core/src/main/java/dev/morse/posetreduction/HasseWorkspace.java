@@ -14,14 +14,13 @@ import java.util.function.IntConsumer;
  * which one search of the smaller side decides. Heights of the original poset still increase
  * along every cover, so they bound the searches. Not thread-safe.
  *
- * <p>Memory: about 48 bytes per element (lists, heights, flags, search stamps, stack and cursors) plus
+ * <p>Memory: about 44 bytes per element (lists, flags, search stamps, stack and cursors) plus
  * about 16 bytes per cover, both directions.
  */
 final class HasseWorkspace {
     private final Poset original;
     private final IntLists lower;
     private final IntLists upper;
-    private final int[] height;
     private final boolean[] removed;
     private final int[] stamp;
     private final int[] stack;
@@ -37,7 +36,6 @@ final class HasseWorkspace {
         int n = poset.size();
         lower = copy(poset.lowerCovers());
         upper = copy(poset.upperCovers());
-        height = new int[n];
         removed = new boolean[n];
         stamp = new int[n];
         stack = new int[n];
@@ -45,7 +43,6 @@ final class HasseWorkspace {
         target = new int[n];
         alive = n;
         for (int x = 0; x < n; x++) {
-            height[x] = poset.height(x);
             if (lower.size(x) == 0) {
                 minimal++;
             }
@@ -89,7 +86,7 @@ final class HasseWorkspace {
 
     /** The height of x in the original poset: it still increases along every cover. */
     int height(int x) {
-        return height[x];
+        return original.height(x);
     }
 
     int lowerCount(int x) {
@@ -170,7 +167,7 @@ final class HasseWorkspace {
     private void bridgeFromBelow(int[] below, int[] above) {
         int ceiling = 0;
         for (int z : above) {
-            ceiling = Math.max(ceiling, height[z]);
+            ceiling = Math.max(ceiling, original.height(z));
         }
         for (int y : below) {
             int mark = ++epoch;
@@ -193,7 +190,7 @@ final class HasseWorkspace {
                     target[w] = -mark;
                     missing--;
                 }
-                if (stamp[w] != mark && height[w] < ceiling) {
+                if (stamp[w] != mark && original.height(w) < ceiling) {
                     stamp[w] = mark;
                     stack[top] = w;
                     cursor[top++] = 0;
@@ -211,14 +208,14 @@ final class HasseWorkspace {
     private void bridgeFromAbove(int[] below, int[] above) {
         int floor = Integer.MAX_VALUE;
         for (int y : below) {
-            floor = Math.min(floor, height[y]);
+            floor = Math.min(floor, original.height(y));
         }
         for (int z : above) {
             int mark = ++epoch;
             int top = 0;
             for (int i = 0; i < lower.size(z); i++) {
                 int w = lower.get(z, i);
-                if (height[w] > floor) {
+                if (original.height(w) > floor) {
                     stack[top++] = w;
                 }
             }
@@ -226,9 +223,9 @@ final class HasseWorkspace {
                 int v = stack[--top];
                 for (int i = 0; i < lower.size(v); i++) {
                     int w = lower.get(v, i);
-                    if (stamp[w] != mark && height[w] >= floor) {
+                    if (stamp[w] != mark && original.height(w) >= floor) {
                         stamp[w] = mark;
-                        if (height[w] > floor) {
+                        if (original.height(w) > floor) {
                             stack[top++] = w;
                         }
                     }

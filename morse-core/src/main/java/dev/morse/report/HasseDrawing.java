@@ -92,16 +92,8 @@ public final class HasseDrawing {
             levels[x] = poset.height(x);
         }
         Adjacency covers = poset.lowerCovers();
-        int[] lo = new int[covers.edgeCount()];
-        int[] up = new int[covers.edgeCount()];
-        int e = 0;
-        for (int x = 0; x < n; x++) {
-            for (int i = covers.start(x); i < covers.end(x); i++) {
-                lo[e] = covers.target(i);
-                up[e] = x;
-                e++;
-            }
-        }
+        int[] lo = covers.edgeTargets();
+        int[] up = covers.edgeSources();
         boolean graded = true;
         for (int k = 0; k < lo.length; k++) {
             graded &= levels[up[k]] == levels[lo[k]] + 1;

@@ -87,9 +87,9 @@ public final class JsonReportWriter {
         json.writeStringField("format", report.format().name().toLowerCase(java.util.Locale.ROOT));
         json.writeStringField("complex", report.complexKind().reportName());
         json.writeStringField("engine", report.engineName());
-        writeIntArray(json, "cells", report.cells());
+        JsonStyle.intArray(json, "cells", report.cells());
         json.writeStringField("matching", report.matchingName());
-        writeIntArray(json, "critical", report.critical());
+        JsonStyle.intArray(json, "critical", report.critical());
         json.writeStringField("coefficients", report.coefficients().toString());
         json.writeBooleanField("reduced", report.reduced());
         writeHomology(json, report.homology().groups());
@@ -115,14 +115,6 @@ public final class JsonReportWriter {
 
     private static DefaultPrettyPrinter prettyPrinter() {
         return JsonStyle.prettyPrinter();
-    }
-
-    private static void writeIntArray(JsonGenerator json, String field, List<? extends Number> values) throws IOException {
-        json.writeArrayFieldStart(field);
-        for (Number v : values) {
-            json.writeNumber(v.longValue());
-        }
-        json.writeEndArray();
     }
 
     static void writeHomology(JsonGenerator json, List<HomologyGroup> groups) throws IOException {
@@ -157,7 +149,7 @@ public final class JsonReportWriter {
         json.writeArrayFieldStart("trials");
         for (TrialCount trial : trials) {
             json.writeStartObject();
-            writeIntArray(json, "critical", trial.critical());
+            JsonStyle.intArray(json, "critical", trial.critical());
             json.writeNumberField("count", trial.count());
             json.writeEndObject();
         }
@@ -204,7 +196,7 @@ public final class JsonReportWriter {
 
     private static void writeImage(JsonGenerator json, ImageFacts image) throws IOException {
         json.writeObjectFieldStart("image");
-        writeIntArray(json, "size", image.size());
+        JsonStyle.intArray(json, "size", image.size());
         json.writeNumberField("slices", image.slices());
         json.writeNumberField("foreground", image.foreground());
         json.writeNumberField("threshold", image.threshold());

@@ -2,9 +2,12 @@ package dev.morse.complex;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.morse.io.SimplicialReader;
+import dev.morse.poset.Poset;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -26,6 +29,22 @@ class SimplicialComplexTest {
         for (int e = k.firstCell(1); e < k.firstCell(2); e++) {
             assertEquals(2, co.size(e), k.cellName(e));
         }
+    }
+
+    @Test
+    void facePosetOfTriangleCoversFacesByInclusion() {
+        // the closed triangle {1 2 3}, worked by hand: 7 nonempty faces; each edge covers its two
+        // vertices and the triangle its three edges, 9 covers
+        SimplicialComplex k = complex("1 2 3\n");
+        Poset faces = k.facePoset();
+        assertEquals(7, faces.size());
+        assertEquals(9, faces.coverCount());
+        int triangle = faces.find("{1 2 3}").orElseThrow();
+        int edge = faces.find("{1 2}").orElseThrow();
+        int vertex = faces.find("{1}").orElseThrow();
+        assertTrue(faces.isBelow(edge, triangle));
+        assertTrue(faces.isBelow(vertex, edge));
+        assertFalse(faces.isBelow(faces.find("{3}").orElseThrow(), edge));
     }
 
     @Test

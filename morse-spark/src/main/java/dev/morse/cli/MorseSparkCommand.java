@@ -1,10 +1,7 @@
 package dev.morse.cli;
 
-import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Spec;
 
 /**
  * The {@code morse-spark} command: {@code intervals} and {@code batch} of {@code morse}, distributed
@@ -16,9 +13,11 @@ import picocli.CommandLine.Spec;
         description = "Interval sweeps and batches of morse, distributed over Apache Spark.",
         subcommands = {SparkIntervalsCommand.class, SparkBatchCommand.class, CommandLine.HelpCommand.class},
         footer = "%nExit codes: 0 success, 2 bad input or options, 1 internal failure.")
-public final class MorseSparkCommand implements Callable<Integer> {
-    @Spec
-    private CommandSpec spec;
+public final class MorseSparkCommand extends CommandGroup {
+    /** The command, without a command line around it; {@link #newCommandLine} gives one. */
+    public MorseSparkCommand() {
+        super("a subcommand");
+    }
 
     /** Runs the command line and exits with its exit code. */
     public static void main(String[] args) {
@@ -28,11 +27,5 @@ public final class MorseSparkCommand implements Callable<Integer> {
     /** A fresh command line with the shared failure handling installed, as {@code morse} has. */
     public static CommandLine newCommandLine() {
         return MorseCommand.configured(new MorseSparkCommand());
-    }
-
-    /** Without a subcommand there is nothing to do: a usage error. */
-    @Override
-    public Integer call() {
-        throw MorseCommand.subcommandRequired(spec);
     }
 }

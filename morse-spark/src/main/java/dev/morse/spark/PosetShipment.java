@@ -4,7 +4,6 @@ import dev.morse.poset.Adjacency;
 import dev.morse.poset.Poset;
 import dev.morse.poset.PosetBuilder;
 import java.io.Serializable;
-import java.util.Arrays;
 
 /**
  * A poset in the few arrays it takes to send it to other machines: its labels, by id, and its covers
@@ -27,16 +26,7 @@ public record PosetShipment(String[] labels, int[] coverLowers, int[] coverUpper
             labels[x] = poset.label(x);
         }
         Adjacency below = poset.lowerCovers();
-        int[] lowers = new int[below.edgeCount()];
-        int[] uppers = new int[below.edgeCount()];
-        int k = 0;
-        for (int z = 0; z < n; z++) {
-            for (int i = below.start(z); i < below.end(z); i++) {
-                lowers[k] = below.target(i);
-                uppers[k++] = z;
-            }
-        }
-        return new PosetShipment(labels, Arrays.copyOf(lowers, k), Arrays.copyOf(uppers, k));
+        return new PosetShipment(labels, below.edgeTargets(), below.edgeSources());
     }
 
     /** The number of elements. */

@@ -1,6 +1,7 @@
 package dev.morse.io;
 
 import dev.morse.complex.Boundary;
+import dev.morse.poset.Adjacency;
 import java.util.Arrays;
 
 /**
@@ -29,27 +30,21 @@ public final class BoundaryMatrix {
     static BoundaryMatrix of(String source, int rows, int columns, int[] entryRows, int[] entryColumns, int[] values,
             int[] lines) {
         int n = entryRows.length;
+        int[] entryIndex = new int[n];
+        Arrays.setAll(entryIndex, i -> i);
+        // each column's entries, by index
+        Adjacency entriesOf = Adjacency.fromEdges(columns, entryColumns, entryIndex, n);
         int[] offsets = new int[columns + 1];
-        for (int c : entryColumns) {
-            offsets[c + 1]++;
-        }
-        for (int c = 0; c < columns; c++) {
-            offsets[c + 1] += offsets[c];
-        }
-        int[] fill = Arrays.copyOf(offsets, columns);
-        int[] order = new int[n];
-        for (int i = 0; i < n; i++) {
-            order[fill[entryColumns[i]]++] = i;
-        }
         int[] rowIndex = new int[n];
         int[] sortedValues = new int[n];
         for (int c = 0; c < columns; c++) {
-            int from = offsets[c];
-            int to = offsets[c + 1];
+            int from = entriesOf.start(c);
+            int to = entriesOf.end(c);
+            offsets[c + 1] = to;
             // rows within a column, ascending; columns are short, and the writer's are already sorted
             Integer[] slice = new Integer[to - from];
             for (int k = from; k < to; k++) {
-                slice[k - from] = order[k];
+                slice[k - from] = entriesOf.target(k);
             }
             Arrays.sort(slice, (a, b) -> a.equals(b) ? 0
                     : entryRows[a] != entryRows[b] ? Integer.compare(entryRows[a], entryRows[b]) : Integer.compare(a, b));

@@ -118,27 +118,6 @@ public final class Poset {
 
     /** Whether {@code x < y} (strictly), by a search down the Hasse diagram from {@code y}. */
     public boolean isBelow(int x, int y) {
-        if (x == y || heights[x] >= heights[y]) {
-            return false;
-        }
-        boolean[] seen = new boolean[size()];
-        int[] stack = new int[size()];
-        int top = 0;
-        stack[top++] = y;
-        seen[y] = true;
-        while (top > 0) {
-            int z = stack[--top];
-            for (int i = lowerCovers.start(z); i < lowerCovers.end(z); i++) {
-                int w = lowerCovers.target(i);
-                if (w == x) {
-                    return true;
-                }
-                if (!seen[w] && heights[w] > heights[x]) {
-                    seen[w] = true;
-                    stack[top++] = w;
-                }
-            }
-        }
-        return false;
+        return x != y && heights[x] < heights[y] && PosetOperations.reach(lowerCovers, y, size())[x];
     }
 }

@@ -244,7 +244,7 @@ public final class PosetOperations {
     }
 
     /** Elements reachable from {@code start} along {@code edges}, {@code start} included. */
-    private static boolean[] reach(Adjacency edges, int start, int n) {
+    static boolean[] reach(Adjacency edges, int start, int n) {
         boolean[] seen = new boolean[n];
         int[] stack = new int[n];
         int top = 0;

@@ -55,11 +55,18 @@ public final class VoxelSet {
         return (int) positions(sizes);
     }
 
-    /** The product of {@code sizes}: the number of positions of a box of these extents. */
+    /**
+     * The product of {@code sizes}: the number of positions of a box of these extents, or some
+     * number above {@link #MAX_POSITIONS} when it is larger. It stops there, so that three large
+     * extents cannot wrap a long round to a small product.
+     */
     static long positions(int[] sizes) {
         long p = 1;
         for (int s : sizes) {
-            p *= s;
+            p *= s; // at most MAX_POSITIONS times an int: far inside a long
+            if (p > MAX_POSITIONS) {
+                return p;
+            }
         }
         return p;
     }

@@ -208,5 +208,9 @@ class ImageInputTest {
                 assertThrows(IllegalArgumentException.class, () -> VolumeSize.parse("a,b")).getMessage());
         assertThrows(IllegalArgumentException.class, () -> VolumeSize.parse("4"));
         assertThrows(IllegalArgumentException.class, () -> VolumeSize.parse("4,0,2"));
+        // 2^21 * 2^21 * 2^22 = 2^64 voxels: a product in a long wraps round to 0, which must not pass
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> VolumeSize.parse("2097152,2097152,4194304"))
+                .getMessage().contains("has more than " + VoxelSet.MAX_POSITIONS + " voxels"));
+        assertEquals(46_340 * 46_340, VolumeSize.parse("46340,46340").voxels());
     }
 }

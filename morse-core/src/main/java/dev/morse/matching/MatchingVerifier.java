@@ -80,16 +80,20 @@ public final class MatchingVerifier {
     private static boolean acyclicInEveryDimensionPair(ChainComplex complex, Matching matching, Boundary boundary) {
         int pairs = complex.dimension();
         Progress progress = Progress.current();
-        progress.begin("verify", "dimension pairs", pairs);
+        progress.begin("verify", "cells", complex.cellCount());
         AtomicInteger next = new AtomicInteger();
-        AtomicInteger done = new AtomicInteger();
+        // a pair counts as done the cells of its upper dimension, the first pair its lower one's too
+        AtomicInteger done = new AtomicInteger(complex.cellCount(0));
         AtomicBoolean closedPath = new AtomicBoolean();
         Workers.share(Math.min(pairs, Workers.threads()), w -> {
             for (int d = next.getAndIncrement(); d < pairs && !closedPath.get(); d = next.getAndIncrement()) {
                 if (!acyclicBetween(complex, matching, boundary, d)) {
                     closedPath.set(true);
                 }
-                progress.reached(done.incrementAndGet());
+                int reached = done.addAndGet(complex.cellCount(d + 1));
+                if (w == 0) { // worker 0 runs on the calling thread, the only one a progress sink expects
+                    progress.reached(reached);
+                }
             }
         });
         return !closedPath.get();

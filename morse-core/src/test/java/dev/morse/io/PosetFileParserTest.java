@@ -138,18 +138,9 @@ class PosetFileParserTest {
                 text.append(endings[trial == 2 ? 2 : random.nextInt(2)]);
                 k++;
             }
-            for (String threads : new String[] {"2", "3", "5"}) {
-                String before = System.getProperty("morse.threads");
-                System.setProperty("morse.threads", threads);
-                try {
-                    assertReadsAsText(text.toString(), 30_000 + 10 * trial + threads.charAt(0) - '0');
-                } finally {
-                    if (before == null) {
-                        System.clearProperty("morse.threads");
-                    } else {
-                        System.setProperty("morse.threads", before);
-                    }
-                }
+            for (int threads : new int[] {2, 3, 5}) {
+                int index = 30_000 + 10 * trial + threads;
+                withThreads(threads, () -> assertReadsAsText(text.toString(), index));
             }
         }
     }
@@ -179,19 +170,32 @@ class PosetFileParserTest {
             text.append('\n');
         }
         assertReadsAsText(text.substring(0, 200_000 + text.substring(200_000).indexOf('\n') + 1), 40_000);
-        for (String threads : new String[] {"2", "3"}) {
-            String before = System.getProperty("morse.threads");
-            System.setProperty("morse.threads", threads);
-            try {
-                assertReadsAsText(text.toString(), 40_000 + threads.charAt(0) - '0');
+        for (int threads : new int[] {2, 3}) {
+            int index = 40_000 + threads;
+            withThreads(threads, () -> {
+                assertReadsAsText(text.toString(), index);
                 // and the bytes were read by the byte reader, not left to the text reader
-                assertNotNull(PosetFileParser.read(dir.resolve("input" + (40_000 + threads.charAt(0) - '0') + ".poset")));
-            } finally {
-                if (before == null) {
-                    System.clearProperty("morse.threads");
-                } else {
-                    System.setProperty("morse.threads", before);
-                }
+                assertNotNull(PosetFileParser.read(dir.resolve("input" + index + ".poset")));
+            });
+        }
+    }
+
+    /** A step that reads files. */
+    private interface Reading {
+        void run() throws IOException;
+    }
+
+    /** Runs {@code reading} with the workers' thread count set to {@code threads}, then restores it. */
+    private static void withThreads(int threads, Reading reading) throws IOException {
+        String before = System.getProperty("morse.threads");
+        System.setProperty("morse.threads", Integer.toString(threads));
+        try {
+            reading.run();
+        } finally {
+            if (before == null) {
+                System.clearProperty("morse.threads");
+            } else {
+                System.setProperty("morse.threads", before);
             }
         }
     }

@@ -2,10 +2,7 @@ package dev.morse.matching;
 
 import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
-import dev.morse.parallel.Workers;
 import dev.morse.progress.Progress;
-import java.util.concurrent.atomic.AtomicBoolean;
-import java.util.concurrent.atomic.AtomicInteger;
 
 /**
  * Checks that a matching is a Morse matching (an acyclic matching with unit incidences, Forman 1998;
@@ -15,12 +12,6 @@ import java.util.concurrent.atomic.AtomicInteger;
  * <p>Independent of every heuristic: it reads only the complex's boundary and the partner array.
  * Linear time: the cycle test is Kahn's topological sort on the modified Hasse diagram, using one
  * in-degree counter and one queue slot per cell (8 bytes per cell).
- *
- * <p>A closed path of the modified Hasse diagram never leaves two adjacent dimensions: it goes up
- * only along matched pairs, never twice in a row (a cell has one partner), and comes back down as
- * often as it goes up, so it alternates between dimensions d and d + 1. Each pair of adjacent
- * dimensions is therefore sorted on its own, the pairs on all workers; only when one of them has a
- * closed path is the whole diagram sorted again, to name the same cell whatever the threads.
  */
 public final class MatchingVerifier {
     private MatchingVerifier() {
@@ -73,72 +64,7 @@ public final class MatchingVerifier {
                         + " are paired but not one dimension apart");
             }
         }
-        return acyclicInEveryDimensionPair(complex, matching, boundary) ? MatchingVerdict.VALID
-                : acyclic(complex, matching, boundary);
-    }
-
-    private static boolean acyclicInEveryDimensionPair(ChainComplex complex, Matching matching, Boundary boundary) {
-        int pairs = complex.dimension();
-        Progress progress = Progress.current();
-        progress.begin("verify", "cells", complex.cellCount());
-        AtomicInteger next = new AtomicInteger();
-        // a pair counts as done the cells of its upper dimension, the first pair its lower one's too
-        AtomicInteger done = new AtomicInteger(complex.cellCount(0));
-        AtomicBoolean closedPath = new AtomicBoolean();
-        Workers.share(Math.min(pairs, Workers.threads()), w -> {
-            for (int d = next.getAndIncrement(); d < pairs && !closedPath.get(); d = next.getAndIncrement()) {
-                if (!acyclicBetween(complex, matching, boundary, d)) {
-                    closedPath.set(true);
-                }
-                int reached = done.addAndGet(complex.cellCount(d + 1));
-                if (w == 0) { // worker 0 runs on the calling thread, the only one a progress sink expects
-                    progress.reached(reached);
-                }
-            }
-        });
-        return !closedPath.get();
-    }
-
-    /** Kahn's sort of the modified Hasse diagram restricted to dimensions {@code d} and {@code d + 1}. */
-    private static boolean acyclicBetween(ChainComplex complex, Matching matching, Boundary boundary, int d) {
-        int low = complex.firstCell(d);
-        int middle = complex.firstCell(d + 1);
-        int n = complex.firstCell(d + 2) - low;
-        int[] inDegree = new int[n];
-        for (int s = middle; s < low + n; s++) {
-            for (int i = boundary.start(s); i < boundary.end(s); i++) {
-                int t = boundary.target(i);
-                if (matching.mate(t) == s) {
-                    inDegree[s - low]++;
-                } else {
-                    inDegree[t - low]++;
-                }
-            }
-        }
-        int[] queue = new int[n];
-        int tail = 0;
-        for (int c = 0; c < n; c++) {
-            if (inDegree[c] == 0) {
-                queue[tail++] = c + low;
-            }
-        }
-        for (int head = 0; head < tail; head++) {
-            int c = queue[head];
-            if (c >= middle) {
-                for (int i = boundary.start(c); i < boundary.end(c); i++) {
-                    int t = boundary.target(i);
-                    if (matching.mate(t) != c && --inDegree[t - low] == 0) {
-                        queue[tail++] = t;
-                    }
-                }
-            } else {
-                int m = matching.mate(c);
-                if (m >= middle && m < low + n && --inDegree[m - low] == 0) {
-                    queue[tail++] = m;
-                }
-            }
-        }
-        return tail == n;
+        return acyclic(complex, matching, boundary);
     }
 
     /**

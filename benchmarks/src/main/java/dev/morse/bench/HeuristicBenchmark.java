@@ -9,7 +9,6 @@ import dev.morse.matching.MatchingHeuristic;
 import dev.morse.matching.MatchingHeuristics;
 import dev.morse.matching.MatchingOptions;
 import dev.morse.morsecomplex.MorseReduction;
-import dev.morse.engine.ComplexPolicy;
 import dev.morse.engine.Request;
 import dev.morse.implicit.ElementOrder;
 import dev.morse.input.InputReaders;

@@ -27,7 +27,6 @@ final class OutputFile {
     @Option(names = "--debug", description = "Show stack traces of failures.")
     private boolean debug;
 
-
     /**
      * Makes the input with {@code make} and writes it. Bad arguments of a generator (an
      * IllegalArgumentException) become a usage error naming the command.

@@ -32,11 +32,6 @@ public final class Boundary extends CompressedRows {
         return rowCount();
     }
 
-
-
-
-
-
     /** Coefficient of entry {@code i}. */
     public int coefficient(int i) {
         return coefficients[i];

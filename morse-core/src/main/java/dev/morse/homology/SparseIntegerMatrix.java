@@ -91,8 +91,6 @@ public final class SparseIntegerMatrix extends CompressedRows {
         return entryCount();
     }
 
-
-
     /** Row of entry {@code i}. */
     public int row(int i) {
         return target(i);

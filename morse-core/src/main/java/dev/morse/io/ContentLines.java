@@ -29,7 +29,6 @@ final class ContentLines {
         return lines;
     }
 
-
     /** The next meaningful line, or {@code null} at the end. */
     String next() {
         try {

@@ -107,7 +107,6 @@ public final class MatrixMarketReader {
                 values.toIntArray(), lines.toIntArray());
     }
 
-
     private static int index(String word, int size, String what, String source, int line) {
         try {
             int i = Integer.parseInt(word);

@@ -178,7 +178,6 @@ public final class MeshReader {
         return PolygonMesh.of(source, counts[0], 0, offsets.toIntArray(), corners.toIntArray(), lines.toIntArray());
     }
 
-
     /** The words of a line with its {@code #} comment cut off. */
     private static String[] words(String line) {
         int hash = line.indexOf('#');

@@ -77,7 +77,6 @@ public final class Adjacency extends CompressedRows {
         return size(x);
     }
 
-
     /** A copy of the neighbours of {@code x}. */
     public int[] neighbours(int x) {
         return Arrays.copyOfRange(targets, offsets[x], offsets[x + 1]);

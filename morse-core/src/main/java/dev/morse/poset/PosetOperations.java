@@ -148,7 +148,6 @@ public final class PosetOperations {
         return b.buildKnownAcyclic();
     }
 
-
     /**
      * The element labelled {@code label}.
      *

@@ -89,8 +89,6 @@ public final class StrictDownSets extends CompressedRows {
         return entryCount();
     }
 
-
-
     /** The element stored at index {@code i}. */
     public int element(int i) {
         return target(i);

@@ -3,22 +3,22 @@ package dev.morse.matching;
 import dev.morse.complex.Boundary;
 import dev.morse.complex.ChainComplex;
 import dev.morse.progress.Progress;
-import it.unimi.dsi.fastutil.ints.IntArrayFIFOQueue;
 import java.util.Arrays;
 
 /**
  * The coreduction method of Mrozek and Batko ("Coreduction homology algorithm", Discrete Comput.
  * Geom. 41, 2009): a cell whose boundary, within the cells not yet removed, is exactly one face with
- * a unit incidence forms a coreduction pair with that face, and both are removed. Candidates wait in
- * a queue fed by the cofaces of removed cells; only when the queue runs dry is a cell declared
- * critical, and then always one of lowest dimension among those left (it has an empty boundary
- * there).
+ * a unit incidence forms a coreduction pair with that face, and both are removed. A coface becomes
+ * a candidate when its faces left fall to one or none; candidates are taken least number first
+ * ({@link PendingCells}) rather than in the order they came, which keeps the walk local in memory.
+ * Only when no candidate is left is a cell declared critical, and then always one of lowest
+ * dimension among those left (it has an empty boundary there).
  *
- * <p>The pairs form an acyclic matching: along a gradient path each step reaches a pair removed
- * strictly earlier, since the coface of a pair had no other face left at its removal.
- * Linear time; 8 bytes per cell of working memory besides the coboundary: the partner, and one
- * int that counts the faces left or marks the cell removed, so that the random accesses of the
- * queue's walk meet one array instead of two.
+ * <p>The pairs form an acyclic matching whatever the order of the candidates: along a gradient path
+ * each step reaches a pair removed strictly earlier, since the coface of a pair had no other face
+ * left at its removal. Linear time in practice; working memory besides the coboundary is 8 bytes
+ * per cell (the partner, and one int that counts the faces left or marks the cell removed) and the
+ * candidates' bits.
  */
 final class CoreductionPairing implements MatchingHeuristic.Pairing {
     /** In {@code facesLeft}: the cell is removed. */
@@ -36,7 +36,7 @@ final class CoreductionPairing implements MatchingHeuristic.Pairing {
         for (int c = 0; c < n; c++) {
             facesLeft[c] = boundary.size(c);
         }
-        IntArrayFIFOQueue queue = new IntArrayFIFOQueue();
+        PendingCells waiting = new PendingCells(n);
         Progress progress = Progress.current();
         int pairs = 0;
         // cells are numbered by dimension, so the first cell left is one of lowest dimension
@@ -44,11 +44,11 @@ final class CoreductionPairing implements MatchingHeuristic.Pairing {
             if (facesLeft[next] == REMOVED) {
                 continue;
             }
-            remove(next, facesLeft, coboundary, queue);
-            while (!queue.isEmpty()) {
-                int s = queue.dequeueInt();
+            remove(next, facesLeft, coboundary, waiting);
+            while (!waiting.isEmpty()) {
+                int s = waiting.takeLeast();
                 if (facesLeft[s] == 0) {
-                    enqueueCofaces(s, facesLeft, coboundary, queue);
+                    addCofaces(s, facesLeft, coboundary, waiting);
                 } else if (facesLeft[s] == 1) {
                     int entry = lastFaceEntry(s, facesLeft, boundary);
                     int coefficient = boundary.coefficient(entry);
@@ -56,8 +56,8 @@ final class CoreductionPairing implements MatchingHeuristic.Pairing {
                         int t = boundary.target(entry);
                         mates[s] = t;
                         mates[t] = s;
-                        remove(s, facesLeft, coboundary, queue);
-                        remove(t, facesLeft, coboundary, queue);
+                        remove(s, facesLeft, coboundary, waiting);
+                        remove(t, facesLeft, coboundary, waiting);
                         if ((++pairs & 0x7FF) == 0) {
                             progress.reached(2L * pairs);
                         }
@@ -68,21 +68,24 @@ final class CoreductionPairing implements MatchingHeuristic.Pairing {
         return Matching.adopt(mates);
     }
 
-    private static void remove(int c, int[] facesLeft, Boundary coboundary, IntArrayFIFOQueue queue) {
+    private static void remove(int c, int[] facesLeft, Boundary coboundary, PendingCells waiting) {
         facesLeft[c] = REMOVED;
         for (int i = coboundary.start(c); i < coboundary.end(c); i++) {
             int b = coboundary.target(i);
-            if (facesLeft[b] != REMOVED) {
-                facesLeft[b]--;
-                queue.enqueue(b);
+            int left = facesLeft[b];
+            if (left != REMOVED) {
+                facesLeft[b] = --left;
+                if (left <= 1) {
+                    waiting.add(b);
+                }
             }
         }
     }
 
-    private static void enqueueCofaces(int c, int[] facesLeft, Boundary coboundary, IntArrayFIFOQueue queue) {
+    private static void addCofaces(int c, int[] facesLeft, Boundary coboundary, PendingCells waiting) {
         for (int i = coboundary.start(c); i < coboundary.end(c); i++) {
             if (facesLeft[coboundary.target(i)] != REMOVED) {
-                queue.enqueue(coboundary.target(i));
+                waiting.add(coboundary.target(i));
             }
         }
     }

@@ -8,7 +8,7 @@ package dev.morse.matching;
  * in order of their numbers, which follow dimension and then the input's order, the candidates
  * sweep through the complex, and the cells near one another in memory are visited together. A
  * breadth-first front instead spreads over the whole complex and meets a cache miss at nearly every
- * step (10^7 cells of a voxel block: 4.2 s against 0.3 s).
+ * step (coreduction's pairing on 10^7 cells of a voxel block: 4.2 s from a queue, 0.3 s from here).
  */
 final class PendingCells {
     private final long[] words;

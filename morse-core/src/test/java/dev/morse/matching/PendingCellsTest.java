@@ -19,7 +19,7 @@ class PendingCellsTest {
             int operations = 4 * Math.min(cells, 5_000);
             for (int op = 0; op < operations; op++) {
                 if (reference.isEmpty() || random.nextInt(3) > 0) {
-                    // mostly near the last cell taken, sometimes anywhere: the shape of coreduction's additions
+                    // two additions for each taking on average, anywhere in the range, so the set grows and empties by turns
                     int cell = random.nextInt(cells);
                     pending.add(cell);
                     reference.add(cell);
